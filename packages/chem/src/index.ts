@@ -1,0 +1,3 @@
+// The sole public entry of @ionfolio/chem. Each topic folder owns its own index.ts.
+export * from './types';
+export * from './errors/chem-error';
