@@ -1,3 +1,4 @@
 // The sole public entry of @ionfolio/chem. Each topic folder owns its own index.ts.
 export * from './types';
 export * from './errors/chem-error';
+export * from './peak-list';

@@ -1,0 +1,1 @@
+export { parsePeakList } from './parse-peak-list';
