@@ -1,0 +1,99 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { randomUUID } from 'node:crypto';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import pg from 'pg';
+import type { Logger } from 'pino';
+import type { DataSource } from 'typeorm';
+import type { Env } from './config/env';
+import { apiNotFound, errorMiddleware } from './shared/error-middleware';
+import { csrfGuard } from './shared/csrf-guard';
+import { healthRoutes } from './modules/health/health.routes';
+import { authRoutes } from './modules/auth/auth.routes';
+import { configurePassport } from './modules/auth/auth.service';
+import { usersRoutes } from './modules/users/users.routes';
+
+export interface AppDeps {
+  env: Env;
+  dataSource: DataSource;
+  logger: Logger;
+  sessionPool: pg.Pool;
+}
+
+/** Builds the Express app. It never listens: main.ts and the tests do that. */
+export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const id = randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+    }),
+  );
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          formAction: ["'self'", new URL(env.GITHUB_AUTHORIZATION_URL).origin],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+  app.use(express.json({ limit: '2mb' }));
+
+  const PgStore = connectPgSimple(session);
+  app.use(
+    session({
+      name: 'ionfolio.sid',
+      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false }),
+      secret: env.SESSION_SECRET,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: env.PUBLIC_URL.startsWith('https://'),
+        maxAge: 12 * 60 * 60 * 1000,
+      },
+    }),
+  );
+  const passport = configurePassport(dataSource, env);
+  app.use(passport.initialize());
+  app.use(passport.session());
+
+  app.use('/api', healthRoutes(dataSource));
+  app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN }));
+  app.use('/api/v1', csrfGuard, usersRoutes(dataSource));
+  app.use(['/api', '/auth'], apiNotFound);
+
+  // The built web app, with history fallback for client-side routes.
+  const webDist = path.resolve(env.WEB_DIST);
+  if (existsSync(path.join(webDist, 'index.html'))) {
+    app.use(express.static(webDist, { index: false, maxAge: '1h' }));
+    app.get(/.*/, (_req, res) => {
+      res.sendFile(path.join(webDist, 'index.html'));
+    });
+  }
+  app.use(apiNotFound);
+  app.use(errorMiddleware);
+  return app;
+}

@@ -1,0 +1,22 @@
+import { DataSource } from 'typeorm';
+import { UserEntity } from '../modules/users/user.entity';
+import { AuditEventEntity } from '../modules/audit/audit-event.entity';
+import { MailMessageEntity } from '../modules/mail/mail-message.entity';
+import { Foundation1764640000000 } from './migrations/1764640000000-foundation';
+
+export const entities = [UserEntity, AuditEventEntity, MailMessageEntity];
+export const migrations = [Foundation1764640000000];
+
+/** Builds the one DataSource of the API. Schema changes are migrations; `synchronize` stays off. */
+export function createDataSource(databaseUrl: string): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url: databaseUrl,
+    entities,
+    migrations,
+    synchronize: false,
+    migrationsRun: false,
+    logging: ['error'],
+    extra: { max: 10, connectionTimeoutMillis: 5000 },
+  });
+}

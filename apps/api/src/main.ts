@@ -1,0 +1,42 @@
+import pg from 'pg';
+import { loadEnv } from './config/env';
+import { createLogger } from './shared/logger';
+import { createDataSource } from './db/data-source';
+import { createApp } from './app';
+import { createMailDispatcher } from './modules/mail/mail.service';
+
+const env = loadEnv();
+const logger = createLogger(env.LOG_LEVEL);
+const dataSource = createDataSource(env.DATABASE_URL);
+await dataSource.initialize();
+const pending = await dataSource.showMigrations();
+if (pending) {
+  logger.fatal('the database has migrations that were not run; run `npm run db:migrate`');
+  process.exit(1);
+}
+const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
+const app = createApp({ env, dataSource, logger, sessionPool });
+const mail = createMailDispatcher(
+  dataSource,
+  { host: env.SMTP_HOST, port: env.SMTP_PORT, secure: env.SMTP_SECURE, user: env.SMTP_USER, password: env.SMTP_PASSWORD, from: env.MAIL_FROM },
+  logger,
+);
+mail.start();
+
+const server = app.listen(env.PORT, env.HOST, () => {
+  logger.info(`Ionfolio API listening on http://${env.HOST}:${env.PORT}`);
+});
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, 'shutting down');
+  mail.stop();
+  server.close();
+  await sessionPool.end().catch(() => undefined);
+  await dataSource.destroy().catch(() => undefined);
+  process.exit(0);
+}
+process.on('SIGINT', () => void shutdown('SIGINT'));
+process.on('SIGTERM', () => void shutdown('SIGTERM'));

@@ -1,0 +1,3 @@
+export { startFakeOAuth, type FakeOAuth } from './fake-oauth';
+export { startFakeSmtp, type FakeSmtp, type CapturedMail } from './fake-smtp';
+export { DEMO_IDENTITIES, type DemoIdentity } from './demo-identities';
