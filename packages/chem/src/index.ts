@@ -2,3 +2,6 @@
 export * from './types';
 export * from './errors/chem-error';
 export * from './peak-list';
+export * from './elements';
+export * from './formula';
+export * from './isotopes';
