@@ -1,0 +1,71 @@
+import type { Role } from '../lib/roles';
+
+/** One screen: where it lives, what the navigation calls it and the lowest role that may open it. */
+export type Screen = {
+  path: string;
+  label: string;
+  minRole: Role;
+};
+
+export const paths = {
+  home: { path: '/', label: 'Home', minRole: 'reader' },
+  identify: { path: '/identify', label: 'Identify', minRole: 'reader' },
+  batchIdentify: { path: '/identify/batch', label: 'Batch', minRole: 'reader' },
+  library: { path: '/library', label: 'Library', minRole: 'reader' },
+  entry: { path: '/entries/:accession', label: 'Entry', minRole: 'reader' },
+  submit: { path: '/submit', label: 'Submit', minRole: 'contributor' },
+  review: { path: '/review', label: 'Review desk', minRole: 'curator' },
+  editions: { path: '/editions', label: 'Editions', minRole: 'reader' },
+  overview: { path: '/overview', label: 'Overview', minRole: 'reader' },
+  adminUsers: { path: '/admin/users', label: 'Users', minRole: 'admin' },
+  adminKeys: { path: '/admin/keys', label: 'Access keys', minRole: 'admin' },
+  adminOutbox: { path: '/admin/outbox', label: 'Outbox', minRole: 'admin' },
+  adminAudit: { path: '/admin/audit', label: 'Audit log', minRole: 'admin' },
+  signIn: { path: '/sign-in', label: 'Sign in', minRole: 'reader' },
+} as const satisfies Record<string, Screen>;
+
+/** The header navigation, in order; `Admin` opens the users page, the admin pages link to each other. */
+export const mainNavigation: readonly Screen[] = [
+  paths.identify,
+  paths.batchIdentify,
+  paths.library,
+  paths.editions,
+  paths.overview,
+  paths.submit,
+  paths.review,
+  { ...paths.adminUsers, label: 'Admin' },
+];
+
+export const adminNavigation: readonly Screen[] = [
+  paths.adminUsers,
+  paths.adminKeys,
+  paths.adminOutbox,
+  paths.adminAudit,
+];
+
+/** The page an entry lives on, e.g. `/entries/IF-000123`. */
+export function entryHref(accession: string): string {
+  return `/entries/${encodeURIComponent(accession)}`;
+}
+
+/** The sign-in page, remembering where to come back to (only same-site paths are kept). */
+export function signInHref(returnTo?: string, error?: string): string {
+  const params = new URLSearchParams();
+  if (returnTo && isSafeReturnTo(returnTo) && !returnTo.startsWith(paths.signIn.path)) {
+    params.set('returnTo', returnTo);
+  }
+  if (error) params.set('error', error);
+  const query = params.toString();
+  return query ? `${paths.signIn.path}?${query}` : paths.signIn.path;
+}
+
+/** The GitHub sign-in start; a full-page navigation, since the provider redirects back to the API. */
+export function githubSignInHref(returnTo: string | null): string {
+  const safe = returnTo && isSafeReturnTo(returnTo) ? returnTo : paths.identify.path;
+  return `/auth/github?returnTo=${encodeURIComponent(safe)}`;
+}
+
+/** A return path must stay on this site: one leading slash, no protocol-relative `//host`. */
+export function isSafeReturnTo(value: string): boolean {
+  return value.startsWith('/') && !value.startsWith('//') && !value.startsWith('/\\');
+}
