@@ -5,3 +5,4 @@ export * from './peak-list';
 export * from './elements';
 export * from './formula';
 export * from './isotopes';
+export * from './jcamp';
