@@ -1,26 +1,19 @@
 import { ChemError } from '../errors/chem-error';
-import type { PeakList } from '../types';
+import type { JcampSpectrum } from './jcamp-spectrum';
 import { jcampLabelKey } from './jcamp-records';
 
-/** What {@link writeJcamp} writes: a spectrum and its metadata; every field but title and peaks optional. */
-export interface JcampWriteInput {
-  title: string;
-  peaks: PeakList;
-  formula?: string;
-  casRn?: string;
-  molecularWeight?: number;
-  ionizationEnergyEv?: number;
-  ionizationMode?: string;
-  spectrometerType?: string;
-  inlet?: string;
-  retentionIndex?: number;
+/**
+ * What {@link writeJcamp} writes: the fields of a {@link JcampSpectrum} (all but `title` and
+ * `peaks` optional), plus the two labels JCAMP-DX 5.01 requires.
+ */
+export type JcampWriteInput = Omit<JcampSpectrum, 'labels'> & {
   /** ##ORIGIN (required by JCAMP-DX 5.01); default `Ionfolio`. */
   origin?: string;
   /** ##OWNER (required by JCAMP-DX 5.01); default `unspecified`. */
   owner?: string;
   /** Further labels, written as `##LABEL=value` after the standard ones (standard ones win). */
   labels?: Readonly<Record<string, string>>;
-}
+};
 
 const LINE_WIDTH = 80;
 
