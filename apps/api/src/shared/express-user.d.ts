@@ -1,7 +1,6 @@
 import type { SessionUser } from '../modules/users/users.schemas';
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     // Passport puts the signed-in user on req.user.
     // eslint-disable-next-line @typescript-eslint/no-empty-object-type

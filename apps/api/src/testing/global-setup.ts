@@ -10,6 +10,7 @@ export default async function setup(): Promise<void> {
     throw new Error(
       `The API tests need the test PostgreSQL cluster at ${TEST_DATABASE_URL}. Run them through \`npm test\`, ` +
         `which starts it (scripts/test.sh). Cause: ${(err as Error).message}`,
+      { cause: err },
     );
   }
   await ds.runMigrations({ transaction: 'each' });

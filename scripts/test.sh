@@ -1,0 +1,30 @@
+#!/usr/bin/env bash
+# npm test: the same bootstrap as npm start, on a separate test cluster and database, then lint,
+# type-check, the web build, and every vitest project (chem, api, web, browser journeys).
+set -euo pipefail
+cd "$(dirname "$0")/.."
+ROOT=$PWD
+source scripts/lib/deps.sh
+source scripts/lib/pg.sh
+
+deps_ensure_node_modules
+pg_ensure_binaries
+deps_ensure_chromium
+
+PG_DIR="$ROOT/.data/pg-test"
+PG_PORT="${IONFOLIO_TEST_PG_PORT:-54330}"
+# Durability is not what the tests measure: skip fsync on the throw-away test cluster.
+PG_FSYNC=off pg_ensure_running "$PG_DIR" "$PG_PORT"
+trap 'pg_stop "$PG_DIR"' EXIT
+pg_ensure_database "$PG_PORT" ionfolio_test fresh
+export TEST_DATABASE_URL="postgres://ionfolio@127.0.0.1:$PG_PORT/ionfolio_test"
+
+echo "ionfolio: lint"
+node_modules/.bin/eslint . --max-warnings=0
+echo "ionfolio: type-check"
+node_modules/.bin/tsc -p tsconfig.json
+for p in packages/chem apps/fakes apps/api apps/web tests; do node_modules/.bin/tsc -p "$p"; done
+echo "ionfolio: web build"
+node_modules/.bin/vite build --logLevel warn
+echo "ionfolio: tests"
+node_modules/.bin/vitest run "$@"
