@@ -6,3 +6,4 @@ export * from './elements';
 export * from './formula';
 export * from './isotopes';
 export * from './jcamp';
+export * from './fragments';
