@@ -10,12 +10,18 @@ function shouldRetry(failureCount: number, error: unknown): boolean {
   return false;
 }
 
-export function createQueryClient(): QueryClient {
+type QueryClientOptions = {
+  /** Pause before a retry; tests pass 0 to keep the same policy without the wait. */
+  retryDelayMs?: number;
+};
+
+export function createQueryClient({ retryDelayMs }: QueryClientOptions = {}): QueryClient {
   return new QueryClient({
     defaultOptions: {
       queries: {
         staleTime: 30_000,
         retry: shouldRetry,
+        ...(retryDelayMs === undefined ? {} : { retryDelay: retryDelayMs }),
         refetchOnWindowFocus: false,
       },
       mutations: {

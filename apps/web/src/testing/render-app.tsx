@@ -7,7 +7,7 @@ import { createQueryClient } from '../lib/query-client';
 
 /** Renders the whole app at `url` with the real routes and providers, in memory. */
 export function renderApp(url: string) {
-  const queryClient = createQueryClient();
+  const queryClient = createQueryClient({ retryDelayMs: 0 });
   const router = createMemoryRouter(routes, { initialEntries: [url] });
   const disconnect = redirectToSignInOn401(router);
   onTestFinished(() => {

@@ -38,11 +38,11 @@ describe('sign-in page', () => {
     expect(button.getAttribute('href')).toBe('/auth/github?returnTo=%2Fidentify');
   });
 
-  it('when the last try failed, shows the error from ?error=', async () => {
+  it('when the provider refused, shows the message for ?error=denied', async () => {
     installFakeFetch({ 'GET /api/auth/config': json({ provider: 'github', localStandIn: true }) });
-    renderApp('/sign-in?error=access_denied');
+    renderApp('/sign-in?error=denied');
 
-    expect((await screen.findByRole('alert')).textContent).toMatch(/cancelled at the provider/);
+    expect((await screen.findByRole('alert')).textContent).toMatch(/cancelled or refused at the provider/);
   });
 
   it('when the error code is unknown, shows it as sent', async () => {

@@ -1,9 +1,7 @@
+// The codes the API's OAuth callback redirects with (apps/api auth routes).
 const messages: Record<string, string> = {
-  access_denied: 'Sign-in was cancelled at the provider. You can try again.',
-  oauth_failed: 'The sign-in provider did not confirm who you are. Please try again.',
-  state_mismatch: 'The sign-in took too long or was started in another tab. Please start it again.',
-  session_expired: 'Your session has ended. Please sign in again.',
-  account_disabled: 'This account may not sign in. Ask an admin of your Ionfolio.',
+  denied: 'Sign-in was cancelled or refused at the provider. You can try again.',
+  provider: 'The sign-in provider could not be reached or did not confirm who you are. Please try again.',
 };
 
 const longestShownCode = 60;
