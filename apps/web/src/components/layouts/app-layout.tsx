@@ -18,10 +18,10 @@ type AppLayoutProps = {
 };
 
 function navLinkClasses({ isActive }: { isActive: boolean }): string {
-  const base = 'whitespace-nowrap rounded-md px-3 py-1.5 transition-colors';
+  const base = 'inline-block whitespace-nowrap rounded-md px-3 py-1.5 transition-colors hover:bg-paper-sunk';
   return isActive
-    ? `${base} bg-paper-sunk font-bold text-ink shadow-[inset_0_-2px_0_var(--if-copper)]`
-    : `${base} text-ink-soft hover:bg-paper-sunk hover:text-ink`;
+    ? `${base} text-ink underline decoration-copper decoration-2 underline-offset-[7px]`
+    : `${base} text-ink-soft hover:text-ink`;
 }
 
 /** The signed-in frame: header with wordmark, navigation, who is signed in, and the page below. */
@@ -40,7 +40,7 @@ export function AppLayout({ person, navigation, onSignOut, signingOut, signOutEr
             <Wordmark />
           </Link>
           <nav aria-label="Main" className="order-last -mx-3 w-full overflow-x-auto lg:order-none lg:mx-0 lg:w-auto lg:flex-1">
-            <ul className="flex items-center gap-1">
+            <ul className="flex items-center gap-1 p-1">
               {navigation.map((screen) => (
                 <li key={screen.path}>
                   <NavLink
@@ -61,7 +61,10 @@ export function AppLayout({ person, navigation, onSignOut, signingOut, signOutEr
                 {' · '}
               </span>
               <span className="sr-only">, role </span>
-              <span data-testid="current-role" className="text-copper">
+              <span
+                data-testid="current-role"
+                className="rounded border border-rule-faint bg-paper px-1.5 py-0.5 text-xs font-bold tracking-wide text-ink-soft"
+              >
                 {person.role}
               </span>
             </p>

@@ -10,7 +10,7 @@ type SectionNavProps = {
 export function SectionNav({ label, screens }: SectionNavProps) {
   return (
     <nav aria-label={label} className="mb-6 overflow-x-auto border-b border-rule-faint">
-      <ul className="flex gap-1">
+      <ul className="flex gap-1 px-1 pt-1">
         {screens.map((screen) => (
           <li key={screen.path}>
             <NavLink

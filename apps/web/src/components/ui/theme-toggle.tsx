@@ -8,7 +8,7 @@ export function ThemeToggle() {
   return (
     <button
       type="button"
-      className="rounded-md px-2 py-1.5 text-sm text-ink-soft hover:bg-paper-sunk hover:text-ink"
+      className="inline-flex items-center gap-2 rounded-md px-2 py-1.5 text-sm text-ink-soft hover:bg-paper-sunk hover:text-ink"
       aria-pressed={theme === 'dark'}
       title={`Switch to the ${next} theme`}
       onClick={() => {
@@ -16,6 +16,14 @@ export function ThemeToggle() {
         setTheme(next);
       }}
     >
+      <span
+        aria-hidden="true"
+        className={`relative h-3.5 w-6 rounded-full border border-rule transition-colors ${theme === 'dark' ? 'bg-ink-soft' : 'bg-paper-sunk'}`}
+      >
+        <span
+          className={`absolute top-px h-2.5 w-2.5 rounded-full bg-paper-raised shadow-sm transition-[left] ${theme === 'dark' ? 'left-[11px]' : 'left-px'}`}
+        />
+      </span>
       Dark theme
     </button>
   );
