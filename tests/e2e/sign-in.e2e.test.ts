@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signInThroughStandIn } from './browser';
+import { launchBrowser, screenshot, signInControl, signInThroughStandIn } from './browser';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -18,7 +18,7 @@ describe('signing in through the OAuth stand-in', () => {
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
     await page.goto(`${baseUrl}/sign-in`);
-    await expect(page.getByRole('button', { name: /sign in with github/i }).isVisible()).resolves.toBe(true);
+    await expect(signInControl(page).isVisible()).resolves.toBe(true);
     await expect(page.getByText(/stand-in/i).first().isVisible()).resolves.toBe(true);
     await screenshot(page, 'sign-in');
 
@@ -40,7 +40,8 @@ describe('signing in through the OAuth stand-in', () => {
     await page.getByTestId('current-role').waitFor();
     expect((await page.getByTestId('current-role').textContent())?.toLowerCase()).toContain('reader');
     await page.goto(`${baseUrl}/admin/users`);
-    await expect(page.getByText(/not allowed/i).first().isVisible()).resolves.toBe(true);
+    await page.getByText(/not allowed for your role/i).first().waitFor();
+    expect(await page.getByText(/not allowed for your role/i).first().isVisible()).toBe(true);
     await page.getByRole('button', { name: /sign out/i }).click();
     await page.waitForURL(/\/sign-in/);
     const me = await page.evaluate(async () => (await fetch('/api/v1/me')).status);

@@ -39,6 +39,11 @@ export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Ex
         return id;
       },
       autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // One short line per request: method, path, status, time; never headers or cookies.
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
     }),
   );
   app.use(
