@@ -7,3 +7,4 @@ export * from './formula';
 export * from './isotopes';
 export * from './jcamp';
 export * from './fragments';
+export * from './suggest';
