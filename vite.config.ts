@@ -8,6 +8,7 @@ const apiOrigin = 'http://127.0.0.1:8080';
 
 export default defineConfig({
   root: '.',
+  publicDir: 'apps/web/public',
   plugins: [react(), tailwindcss()],
   build: {
     outDir: 'dist/web',

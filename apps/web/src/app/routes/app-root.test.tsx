@@ -116,6 +116,9 @@ describe('app shell', () => {
 
     await screen.findByRole('link', { name: 'Sign in with GitHub' });
     expect(router.state.location.pathname).toBe('/sign-in');
+    expect(router.state.location.search).toBe('');
+    // The cleared cache must not make the leaving page ask /me again.
+    expect(network.made('GET', '/api/v1/me')).toHaveLength(1);
     const [signOut] = network.made('POST', '/auth/sign-out');
     expect(signOut?.headers.get('X-Requested-With')).toBe('ionfolio');
     expect(signOut?.headers.get('Content-Type')).toBe('application/json');

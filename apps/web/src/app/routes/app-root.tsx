@@ -11,12 +11,14 @@ import { hasRole } from '../../lib/roles';
 
 /** The frame of every signed-in page: asks who is signed in, then shows the header and the page. */
 export function AppRoot() {
-  const me = useMe();
   const location = useLocation();
   const navigate = useNavigate();
-  const signOut = useSignOut({ onSignedOut: () => void navigate(paths.signIn.path, { replace: true }) });
+  const signOut = useSignOut({ onSignedOut: () => navigate(paths.signIn.path, { replace: true }) });
+  // Once sign-out is under way, asking who is signed in would only earn a 401.
+  const leaving = signOut.isPending || signOut.isSuccess;
+  const me = useMe({ enabled: !leaving });
 
-  if (me.isPending) return <LoadingState fullPage label="Opening Ionfolio…" />;
+  if (me.isPending) return <LoadingState fullPage label={leaving ? 'Signing out…' : 'Opening Ionfolio…'} />;
   if (me.isError) {
     // The API client normally redirects on 401 already; this covers a render that comes first.
     if (isUnauthenticated(me.error)) {

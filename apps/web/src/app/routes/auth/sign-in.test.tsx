@@ -52,3 +52,13 @@ describe('sign-in page', () => {
     expect((await screen.findByRole('alert')).textContent).toContain('token_exchange_failed');
   });
 });
+
+describe('sign-in page without the API', () => {
+  it('when the sign-in setup cannot be read, still offers the button and says why', async () => {
+    installFakeFetch({ 'GET /api/auth/config': { status: 502 } });
+    renderApp('/sign-in');
+
+    expect((await screen.findByText(/sign-in setup could not be read/)).textContent).toContain('502');
+    expect(screen.getByRole('link', { name: 'Sign in with GitHub' })).toBeTruthy();
+  });
+});

@@ -30,7 +30,10 @@ export function meQueryOptions() {
   });
 }
 
-/** The signed-in person, or an error (401 when nobody is signed in). */
-export function useMe() {
-  return useQuery(meQueryOptions());
+/**
+ * The signed-in person, or an error (401 when nobody is signed in). `enabled: false` keeps what is
+ * known without asking again (while signing out).
+ */
+export function useMe({ enabled = true }: { enabled?: boolean } = {}) {
+  return useQuery({ ...meQueryOptions(), enabled });
 }

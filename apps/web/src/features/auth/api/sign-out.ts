@@ -5,14 +5,17 @@ export function signOut(): Promise<void> {
   return apiClient.send('POST', '/auth/sign-out');
 }
 
-/** Ends the session; on success forgets every cached answer (they belonged to that person). */
-export function useSignOut({ onSignedOut }: { onSignedOut: () => void }) {
+/**
+ * Ends the session; then leaves the signed-in pages (`onSignedOut`) and only afterwards forgets every
+ * cached answer, so no page still on screen asks the API again as nobody.
+ */
+export function useSignOut({ onSignedOut }: { onSignedOut: () => void | Promise<void> }) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: signOut,
-    onSuccess: () => {
+    onSuccess: async () => {
+      await onSignedOut();
       queryClient.clear();
-      onSignedOut();
     },
   });
 }

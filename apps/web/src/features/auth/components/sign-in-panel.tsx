@@ -19,7 +19,7 @@ function ProviderNote() {
   if (config.isError) {
     return (
       <p className="text-sm text-ink-soft">
-        The sign-in setup could not be read ({describeError(config.error)}). The button may still work.
+        The sign-in setup could not be read: {describeError(config.error)} The button may still work.
       </p>
     );
   }
