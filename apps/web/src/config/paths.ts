@@ -8,7 +8,6 @@ export type Screen = {
 };
 
 export const paths = {
-  home: { path: '/', label: 'Home', minRole: 'reader' },
   identify: { path: '/identify', label: 'Identify', minRole: 'reader' },
   batchIdentify: { path: '/identify/batch', label: 'Batch', minRole: 'reader' },
   library: { path: '/library', label: 'Library', minRole: 'reader' },
