@@ -5,6 +5,11 @@ import {
   type CountsVector,
 } from './golden-rules';
 
+// Module-local copies: imported bindings may compile to getters, and this runs per candidate.
+const hcRatioOk = passesHcRatio;
+const ratioFailures = heteroatomRatioFailures;
+const probabilityOk = passesElementProbability;
+
 /**
  * Natural-log plausibility prior of a formula among candidates of the same nominal mass, used to
  * rank suggestions whose isotope clusters fit equally well (or when no cluster is given). A
@@ -24,9 +29,9 @@ export function formulaLogPrior(c: CountsVector, rdbeValue: number): number {
   } else {
     logPrior -= 8;
   }
-  if (!passesHcRatio(c)) logPrior -= 2;
-  logPrior -= 2 * heteroatomRatioFailures(c);
-  if (!passesElementProbability(c)) logPrior -= 2;
+  if (!hcRatioOk(c)) logPrior -= 2;
+  logPrior -= 2 * ratioFailures(c);
+  if (!probabilityOk(c)) logPrior -= 2;
   const rdbeExcess = rdbeValue - (0.75 * c.C + 1);
   if (rdbeExcess > 0) logPrior -= rdbeExcess;
   return logPrior;

@@ -98,13 +98,19 @@ export function passesHcRatio(c: CountsVector): boolean {
 
 /** Number of rule-5 heteroatom ratios outside their common range (all count when C = 0). */
 export function heteroatomRatioFailures(c: CountsVector): number {
-  let failures = 0;
-  for (const symbol of Object.keys(HETEROATOM_COMMON_MAX) as (keyof typeof HETEROATOM_COMMON_MAX &
-    keyof CountsVector)[]) {
-    const count = c[symbol];
-    if (count > 0 && count > (HETEROATOM_COMMON_MAX[symbol] ?? Infinity) * c.C) failures++;
-  }
-  return failures;
+  const limits = HETEROATOM_COMMON_MAX;
+  const over = (count: number, limit: number | undefined) =>
+    count > 0 && count > (limit ?? Infinity) * c.C ? 1 : 0;
+  return (
+    over(c.N, limits.N) +
+    over(c.O, limits.O) +
+    over(c.P, limits.P) +
+    over(c.S, limits.S) +
+    over(c.F, limits.F) +
+    over(c.Cl, limits.Cl) +
+    over(c.Br, limits.Br) +
+    over(c.Si, limits.Si)
+  );
 }
 
 /**

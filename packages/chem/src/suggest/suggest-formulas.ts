@@ -24,6 +24,14 @@ import {
   type GoldenRule,
 } from './golden-rules';
 
+// Module-local copies: bundlers and test runners may compile imported bindings to getters, which
+// costs more than the arithmetic in the enumeration's innermost loops.
+const WINDOW = AGREEMENT_WINDOW;
+const chiSquareOf = windowChiSquare;
+const elementPriorOf = elementLogPrior;
+const priorOf = formulaLogPrior;
+const lewisSenior = passesLewisSenior;
+
 /** One candidate formula for a nominal molecular mass. */
 export interface FormulaSuggestion {
   /** Hill-order formula, e.g. `C6H5Cl`. */
@@ -102,15 +110,15 @@ function truncatedDistributions(symbol: ElementSymbol, max: number): Float64Arra
   const table: Float64Array[] = [];
   for (let n = 0; n <= max; n++) {
     const { start, values } = elementDistribution(symbol, n);
-    const window = new Float64Array(AGREEMENT_WINDOW);
-    for (let k = 0; k < AGREEMENT_WINDOW; k++) window[k] = values[k - start] ?? 0;
+    const window = new Float64Array(WINDOW);
+    for (let k = 0; k < WINDOW; k++) window[k] = values[k - start] ?? 0;
     table.push(window);
   }
   return table;
 }
 
 function convolveWindow(a: Float64Array, b: Float64Array, out: Float64Array): void {
-  for (let k = 0; k < AGREEMENT_WINDOW; k++) {
+  for (let k = 0; k < WINDOW; k++) {
     let sum = 0;
     for (let i = 0; i <= k; i++) sum += (a[i] as number) * (b[k - i] as number);
     out[k] = sum;
@@ -215,12 +223,12 @@ export function suggestFormulas(
       : clusterWindow(constraints.observedCluster, nominalMassDa, 'observedCluster');
 
   // Upper bounds on the ratios M+k / M that the observed cluster tolerates.
-  const maxRatio = new Float64Array(AGREEMENT_WINDOW).fill(Infinity);
+  const maxRatio = new Float64Array(WINDOW).fill(Infinity);
   if (observed !== null) {
     const o0 = observed[0] as number;
     const floor0 = o0 - PRUNE_SIGMAS * (AGREEMENT_NOISE.absolutePercent + AGREEMENT_NOISE.relative * o0);
     if (floor0 > 0) {
-      for (let k = 1; k < AGREEMENT_WINDOW; k++) {
+      for (let k = 1; k < WINDOW; k++) {
         const ok = observed[k] as number;
         maxRatio[k] =
           (ok + PRUNE_SIGMAS * (AGREEMENT_NOISE.absolutePercent + AGREEMENT_NOISE.relative * ok)) / floor0;
@@ -228,19 +236,19 @@ export function suggestFormulas(
     }
   }
   // Lower bounds on the same ratios (0 where the observed peak is within noise of nothing).
-  const minRatio = new Float64Array(AGREEMENT_WINDOW);
+  const minRatio = new Float64Array(WINDOW);
   if (observed !== null) {
     const o0 = observed[0] as number;
     const ceiling0 = o0 + PRUNE_SIGMAS * (AGREEMENT_NOISE.absolutePercent + AGREEMENT_NOISE.relative * o0);
-    for (let k = 1; k < AGREEMENT_WINDOW; k++) {
+    for (let k = 1; k < WINDOW; k++) {
       const ok = observed[k] as number;
       minRatio[k] =
         Math.max(0, ok - PRUNE_SIGMAS * (AGREEMENT_NOISE.absolutePercent + AGREEMENT_NOISE.relative * ok)) /
         ceiling0;
     }
   }
-  const bound = new Float64Array(AGREEMENT_WINDOW);
-  const boundNext = new Float64Array(AGREEMENT_WINDOW);
+  const bound = new Float64Array(WINDOW);
+  const boundNext = new Float64Array(WINDOW);
   /** Whether even the most of every element still to come leaves some M+k / M below the observed range. */
   const cannotReach = (v: Float64Array, nextDepth: number, remainingDa: number): boolean => {
     bound.set(v);
@@ -252,14 +260,12 @@ export function suggestFormulas(
       bound.set(boundNext);
     }
     const b0 = bound[0] as number;
-    for (let k = 1; k < AGREEMENT_WINDOW; k++)
-      if ((bound[k] as number) < (minRatio[k] as number) * b0) return true;
+    for (let k = 1; k < WINDOW; k++) if ((bound[k] as number) < (minRatio[k] as number) * b0) return true;
     return false;
   };
   const tooHigh = (v: Float64Array): boolean => {
     const v0 = v[0] as number;
-    for (let k = 1; k < AGREEMENT_WINDOW; k++)
-      if ((v[k] as number) > (maxRatio[k] as number) * v0) return true;
+    for (let k = 1; k < WINDOW; k++) if ((v[k] as number) > (maxRatio[k] as number) * v0) return true;
     return false;
   };
 
@@ -272,24 +278,27 @@ export function suggestFormulas(
 
   const best: Candidate[] = [];
   const c: CountsVector = { C: 0, H: 0, N: 0, O: 0, S: 0, Cl: 0, Br: 0, F: 0, Si: 0, P: 0, I: 0 };
-  const vectors = Array.from({ length: OUTER.length + 3 }, () => new Float64Array(AGREEMENT_WINDOW));
+  const vectors = Array.from({ length: OUTER.length + 3 }, () => new Float64Array(WINDOW));
   (vectors[0] as Float64Array)[0] = 1;
-  const theoretical = new Float64Array(AGREEMENT_WINDOW);
+  const theoretical = new Float64Array(WINDOW);
   const [cMinRange, cMaxRange] = ranges.C;
   const [hMinRange, hMaxRange] = ranges.H;
 
   const consider = (vector: Float64Array) => {
-    const value = c.C + c.Si - (c.H + c.F + c.Cl + c.Br + c.I) / 2 + (c.N + c.P) / 2 + 1;
-    const logPrior = formulaLogPrior(c, value);
+    const full = best.length >= limit;
     let chi2: number | null = null;
-    let score = logPrior;
+    let score = 0;
     if (observed !== null) {
       let max = 0;
       for (const v of vector) if (v > max) max = v;
-      for (let k = 0; k < AGREEMENT_WINDOW; k++) theoretical[k] = ((vector[k] as number) / max) * 100;
-      chi2 = windowChiSquare(theoretical, observed);
-      score -= chi2 / 2;
+      for (let k = 0; k < WINDOW; k++) theoretical[k] = ((vector[k] as number) / max) * 100;
+      chi2 = chiSquareOf(theoretical, observed);
+      score = -chi2 / 2;
+      // The element terms bound the prior from above: skip the rest when even they cannot win a place.
+      if (full && score + elementPriorOf(c) <= (best[best.length - 1] as Candidate).score) return;
     }
+    const value = c.C + c.Si - (c.H + c.F + c.Cl + c.Br + c.I) / 2 + (c.N + c.P) / 2 + 1;
+    score += priorOf(c, value);
     if (best.length >= limit && score <= (best[best.length - 1] as Candidate).score) return;
     let at = best.length;
     while (at > 0 && (best[at - 1] as Candidate).score < score) at--;
@@ -312,7 +321,7 @@ export function suggestFormulas(
     for (let carbon = cLow; carbon <= cHigh; carbon++) {
       c.C = carbon;
       c.H = remainingDa - 12 * carbon;
-      if (!passesLewisSenior(c)) continue;
+      if (!lewisSenior(c)) continue;
       if (observed !== null) {
         convolveWindow(parent, tables.C[carbon] as Float64Array, withC);
         if (tooHigh(withC)) break; // more carbon only raises M+k / M
@@ -339,7 +348,7 @@ export function suggestFormulas(
       if (left < 0) break;
       c[symbol] = n;
       // The prior's element terms bound every score below this branch and only fall as n grows.
-      if (best.length >= limit && elementLogPrior(c) <= (best[best.length - 1] as Candidate).score) break;
+      if (best.length >= limit && elementPriorOf(c) <= (best[best.length - 1] as Candidate).score) break;
       if (observed !== null) {
         convolveWindow(parent, tables[symbol][n] as Float64Array, child);
         if (tooHigh(child)) break; // more of this element only raises M+k / M
