@@ -8,3 +8,5 @@ export * from './isotopes';
 export * from './jcamp';
 export * from './fragments';
 export * from './suggest';
+export * from './reading';
+export * from './checks';

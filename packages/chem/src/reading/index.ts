@@ -1,0 +1,3 @@
+export { readMolecularIon } from './read-molecular-ion';
+export type { MolecularIonReading, ReadMolecularIonOptions } from './read-molecular-ion';
+export type { CarbonRange } from './carbon-range';
