@@ -25,7 +25,13 @@ function prune(start: number, values: Float64Array): NominalDistribution {
   return { start: start + lo, values: values.slice(lo, hi + 1) };
 }
 
-/** Convolution of two nominal distributions (the distribution of the sum of the offsets), pruned. */
+/**
+ * Convolution of two nominal distributions (the distribution of the sum of the offsets), with both
+ * tails pruned below 1e-14 of the maximum.
+ *
+ * @example
+ * convolve(elementDistribution('Cl', 1), elementDistribution('Br', 1)).values // ClBr: M, M+1 (0), M+2, M+3 (0), M+4
+ */
 export function convolve(a: NominalDistribution, b: NominalDistribution): NominalDistribution {
   const out = new Float64Array(a.values.length + b.values.length - 1);
   for (let i = 0; i < a.values.length; i++) {
@@ -50,7 +56,11 @@ const SINGLE = new Map<ElementSymbol, NominalDistribution>();
 
 /**
  * Nominal-mass isotope distribution of `count` atoms of one element (exact multinomial, summed by
- * nominal mass, computed by repeated squaring with pruning of negligible tails).
+ * nominal mass, computed by repeated squaring with pruning of negligible tails). Probabilities sum
+ * to 1 (less the pruned tails); `count` must be a non-negative integer (0 gives the unit distribution).
+ *
+ * @example
+ * elementDistribution('Cl', 2).values // Float64Array [0.5740, 0, 0.3673, 0, 0.0588] (≈)
  */
 export function elementDistribution(symbol: ElementSymbol, count: number): NominalDistribution {
   let base = SINGLE.get(symbol);

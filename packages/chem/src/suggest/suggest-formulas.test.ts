@@ -100,48 +100,60 @@ const COMPOUNDS: readonly [name: string, formula: string][] = [
   ['2-ethylhexanol', 'C8H18O'],
 ];
 
-/** Simulated measurement: 3 % relative and 0.15 percentage-point absolute Gaussian noise, peaks < 0.05 dropped. */
-function noisyCluster(formula: string, random: () => number): ClusterPeak[] {
+interface Noise {
+  relative: number;
+  absolutePercent: number;
+}
+
+/** Simulated measurement: Gaussian noise, relative and absolute (percentage points); peaks < 0.05 dropped. */
+function noisyCluster(formula: string, random: () => number, noise: Noise): ClusterPeak[] {
   const normal = gaussian(random);
   const noisy = isotopeCluster(formula)
     .map((p) => ({
       mz: p.mz,
-      relIntensity: Math.max(0, p.relIntensity * (1 + 0.03 * normal()) + 0.15 * normal()),
+      relIntensity: Math.max(
+        0,
+        p.relIntensity * (1 + noise.relative * normal()) + noise.absolutePercent * normal(),
+      ),
     }))
     .filter((p) => p.relIntensity >= 0.05);
   const max = Math.max(...noisy.map((p) => p.relIntensity));
   return noisy.map((p) => ({ mz: p.mz, relIntensity: (100 * p.relIntensity) / max }));
 }
 
+function evaluate(noise: Noise, seed: number) {
+  const random = seededRandom(seed);
+  let top1 = 0;
+  let top5 = 0;
+  let slowestMs = 0;
+  const misses: string[] = [];
+  for (const [name, formula] of COMPOUNDS) {
+    const observedCluster = noisyCluster(formula, random, noise);
+    const start = nowMs();
+    const suggestions = suggestFormulas(nominalMass(formula), { observedCluster, limit: 20 });
+    slowestMs = Math.max(slowestMs, nowMs() - start);
+    const rank = suggestions.findIndex((s) => s.formula === formula);
+    if (rank === 0) top1++;
+    if (rank >= 0 && rank < 5) top5++;
+    else
+      misses.push(
+        `${name} ${formula} rank ${rank < 0 ? '>20' : rank + 1} (first ${suggestions[0]?.formula})`,
+      );
+  }
+  const n = COMPOUNDS.length;
+  const line = `suggestFormulas on ${n} compounds, noise ${100 * noise.relative} % + ${noise.absolutePercent} pp: top-1 ${((100 * top1) / n).toFixed(1)} %, top-5 ${((100 * top5) / n).toFixed(1)} %, slowest ${slowestMs.toFixed(1)} ms`;
+  return { n, top1Rate: top1 / n, top5Rate: top5 / n, line, misses };
+}
+
 describe('suggestFormulas', () => {
   it('puts the true formula in its top 5 for at least 80 % of 75 real-looking compounds with a noisy cluster', () => {
-    const random = seededRandom(1234);
-    let top1 = 0;
-    let top5 = 0;
-    let slowestMs = 0;
-    const misses: string[] = [];
-    for (const [name, formula] of COMPOUNDS) {
-      const massDa = nominalMass(formula);
-      const observedCluster = noisyCluster(formula, random);
-      const start = nowMs();
-      const suggestions = suggestFormulas(massDa, { observedCluster, limit: 20 });
-      slowestMs = Math.max(slowestMs, nowMs() - start);
-      const truth = suggestions.find((s) => s.formula === formula) ?? null;
-      const rank = truth === null ? -1 : suggestions.indexOf(truth);
-      if (rank === 0) top1++;
-      if (rank >= 0 && rank < 5) top5++;
-      else
-        misses.push(
-          `${name} ${formula} rank ${rank < 0 ? '>20' : rank + 1} (first ${suggestions[0]?.formula})`,
-        );
-    }
-    const n = COMPOUNDS.length;
-    reportLine(
-      `suggestFormulas on ${n} compounds: top-1 ${((100 * top1) / n).toFixed(1)} %, top-5 ${((100 * top5) / n).toFixed(1)} %, slowest ${slowestMs.toFixed(1)} ms`,
-    );
-    if (misses.length > 0) reportLine(`outside top 5: ${misses.join('; ')}`);
-    expect(n).toBeGreaterThanOrEqual(40);
-    expect(top5 / n).toBeGreaterThanOrEqual(0.8);
+    const modest = evaluate({ relative: 0.03, absolutePercent: 0.15 }, 1234);
+    reportLine(modest.line);
+    if (modest.misses.length > 0) reportLine(`outside top 5: ${modest.misses.join('; ')}`);
+    // Twice the noise, for the record (printed, not asserted).
+    reportLine(evaluate({ relative: 0.06, absolutePercent: 0.3 }, 4321).line);
+    expect(modest.n).toBeGreaterThanOrEqual(40);
+    expect(modest.top5Rate).toBeGreaterThanOrEqual(0.8);
   });
 });
 
