@@ -1,0 +1,3 @@
+export * from './search-options';
+export * from './spectrum-index';
+export * from './synthetic-library';

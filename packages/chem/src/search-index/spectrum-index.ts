@@ -1,0 +1,455 @@
+import {
+  accumulateCosine,
+  accumulateEntropy,
+  accumulateWeighted,
+  type Accumulators,
+  type EntropySlotWeights,
+  type PostingLists,
+} from './accumulate-postings';
+import { growTypedArray, type PackedArray } from './grow-typed-array';
+import { computeScoreBounds, type QueryTotals } from './score-bounds';
+import {
+  passesMetaFilters,
+  checkHitCount,
+  resolveSearchOptions,
+  type ResolvedSearch,
+  type SpectrumHit,
+  type SpectrumIndexOptions,
+  type SpectrumMeta,
+  type SpectrumSearchOptions,
+} from './search-options';
+import { selectTopHits } from './select-top-hits';
+import { ChemError } from '../errors/chem-error';
+import { entropyWeights } from '../similarity/entropy-similarity';
+import { scoreSpectrumViews } from '../similarity/score-spectrum-views';
+import { assertSimilarityMethod, type SimilarityMethod } from '../similarity/similarity-method';
+import { prepareSpectrum, type SpectrumView } from '../similarity/spectrum-view';
+import { STEIN_SCOTT_INTENSITY_POWER } from '../similarity/weighted-dot-product';
+import { MAX_MZ } from '../spectrum/validate-peaks';
+import type { PeakList } from '../types';
+
+const OFFSET_COUNT = MAX_MZ + 2;
+
+/** Per-spectrum columns, one element per slot. NaN in nominalMass / retentionIndex = not given. */
+interface SlotColumns {
+  ids: Uint32Array;
+  start: Uint32Array;
+  length: Uint16Array;
+  alive: Uint8Array;
+  nominalMass: Float32Array;
+  retentionIndex: Float32Array;
+  elementsMask: Uint32Array;
+  cosineNormSq: Float32Array;
+  weightedNormSq: Float32Array;
+  entropyExponent: Float32Array;
+  entropyLnTotal: Float32Array;
+  plainLnTotal: Float32Array;
+}
+
+function emptySlotColumns(): SlotColumns {
+  return {
+    ids: new Uint32Array(0),
+    start: new Uint32Array(0),
+    length: new Uint16Array(0),
+    alive: new Uint8Array(0),
+    nominalMass: new Float32Array(0),
+    retentionIndex: new Float32Array(0),
+    elementsMask: new Uint32Array(0),
+    cosineNormSq: new Float32Array(0),
+    weightedNormSq: new Float32Array(0),
+    entropyExponent: new Float32Array(0),
+    entropyLnTotal: new Float32Array(0),
+    plainLnTotal: new Float32Array(0),
+  };
+}
+
+function mapSlotColumns(columns: SlotColumns, transform: <T extends PackedArray>(column: T) => T): SlotColumns {
+  const out = { ...columns };
+  for (const key of Object.keys(out) as (keyof SlotColumns)[]) {
+    (out as Record<keyof SlotColumns, PackedArray>)[key] = transform(columns[key]);
+  }
+  return out;
+}
+
+function emptyLists(): PostingLists {
+  return { offsets: new Uint32Array(OFFSET_COUNT), slots: new Uint32Array(0), weights: new Float32Array(0) };
+}
+
+function postingWeight(relIntensity: number): number {
+  return Math.exp(STEIN_SCOTT_INTENSITY_POWER * Math.log(relIntensity));
+}
+
+function optionalMeta(value: number | undefined, field: string): number {
+  if (value === undefined) return NaN;
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new ChemError('INVALID_ARGUMENT', `${field} must be a finite number`, { field });
+  }
+  return value;
+}
+
+/** Memory held by a {@link SpectrumIndex}, in bytes. */
+export interface SpectrumIndexMemory {
+  /** Packed typed arrays that make up the index (posting lists, peaks, per-spectrum values). */
+  indexBytes: number;
+  /** Reusable per-search scratch (accumulators, bounds), sized by the number of spectra. */
+  scratchBytes: number;
+  /** Peaks stored (after normalisation). */
+  peakCount: number;
+}
+
+/**
+ * An exact search index over many library spectra, in packed typed arrays.
+ *
+ * Layout: every spectrum is normalised once ({@link prepareSpectrum}: nominal m/z, duplicates summed,
+ * base peak 100, Float32 intensities) and stored as Uint16 m/z + Float32 relative intensity. An inverted
+ * index by nominal m/z holds, per peak, the spectrum's slot (Uint32) and q = I^0.6 (Float32); per
+ * spectrum a few Float32 sums (norms, entropy weights) and the filter values. About 14–15 bytes per peak.
+ *
+ * Search: the query's posting lists are walked in m/z order, accumulating per spectrum the dot products
+ * (and the composite ratio term, or entropy terms). From these, each touched spectrum gets an upper and
+ * a lower bound of its score; only spectra whose upper bound reaches the k-th best lower bound are scored
+ * exactly, with the very function {@link compareSpectra} uses. Results are therefore identical to scoring
+ * every spectrum one by one: same ids, same scores, ties broken by ascending id; spectra that share no
+ * m/z with the query (score 0) are never returned.
+ *
+ * Incremental: `add` appends to a small delta tier and `remove` marks a spectrum dead; the index repacks
+ * itself at the next search when either grows past 1/8 of the library (or call {@link SpectrumIndex.pack}).
+ *
+ * @example
+ * const index = new SpectrumIndex();
+ * index.add(1, [[43, 100], [58, 25]], { nominalMass: 58 });
+ * index.search([[43, 90], [58, 30]], { k: 5 }); // [{ id: 1, score: 0.99…, matchedPeakCount: 2 }]
+ */
+export class SpectrumIndex {
+  private readonly defaultMethod: SimilarityMethod;
+  private readonly defaultK: number;
+  private slotCount = 0;
+  private liveCount = 0;
+  private deadCount = 0;
+  private peakCount = 0;
+  private slot: SlotColumns = emptySlotColumns();
+  private peakMz = new Uint16Array(0);
+  private peakRelIntensity = new Float32Array(0);
+  private readonly slotById = new Map<number, number>();
+  private main: PostingLists = emptyLists();
+  private delta: PostingLists = emptyLists();
+  private mainSlotEnd = 0;
+  private deltaDirty = false;
+  private scratch: (Accumulators & { upper: Float64Array; lower: Float64Array; checked: Uint8Array }) | undefined;
+
+  /**
+   * @param options - `method` (default `composite`) and `k` (default 10) used when a search omits them.
+   * @throws {ChemError} `INVALID_ARGUMENT` for an unknown method or a k that is not a positive integer.
+   */
+  constructor(options: SpectrumIndexOptions = {}) {
+    this.defaultMethod = assertSimilarityMethod(options.method ?? 'composite');
+    this.defaultK = checkHitCount(options.k ?? 10);
+  }
+
+  /** Number of spectra in the index. */
+  get size(): number {
+    return this.liveCount;
+  }
+
+  /** Whether a spectrum with this id is in the index. */
+  has(id: number): boolean {
+    return this.slotById.has(id);
+  }
+
+  /**
+   * Adds one spectrum.
+   *
+   * @param id - caller's id, an integer 0 … 2^32 − 1, unique in the index.
+   * @param peaks - the spectrum, any order and scale; normalised as {@link compareSpectra} does; not changed.
+   * @param meta - nominal mass (Da), retention index, element mask, used by search filters.
+   * @throws {ChemError} `INVALID_ARGUMENT` (field `id` or `meta.*`) for a bad or duplicate id or meta;
+   *   `INVALID_PEAKS` / `EMPTY_SPECTRUM` (fields `peaks…`) for a bad peak list.
+   */
+  add(id: number, peaks: PeakList, meta: SpectrumMeta = {}): void {
+    if (!Number.isInteger(id) || id < 0 || id > 0xffffffff) {
+      throw new ChemError('INVALID_ARGUMENT', 'id must be an integer from 0 to 4294967295', { field: 'id' });
+    }
+    if (this.slotById.has(id)) {
+      throw new ChemError('INVALID_ARGUMENT', `id ${id} is already in the index; remove it first`, { field: 'id' });
+    }
+    const nominalMass = optionalMeta(meta.nominalMass, 'meta.nominalMass');
+    const retentionIndex = optionalMeta(meta.retentionIndex, 'meta.retentionIndex');
+    const elementsMask = optionalMeta(meta.elementsMask, 'meta.elementsMask');
+    const view = prepareSpectrum(peaks, 'peaks');
+    const length = view.end - view.start;
+    const slot = this.slotCount;
+    this.ensureSlotCapacity(slot + 1);
+    this.ensurePeakCapacity(this.peakCount + length);
+    this.slot.ids[slot] = id;
+    this.slot.start[slot] = this.peakCount;
+    this.slot.length[slot] = length;
+    this.slot.alive[slot] = 1;
+    this.slot.nominalMass[slot] = nominalMass;
+    this.slot.retentionIndex[slot] = retentionIndex;
+    this.slot.elementsMask[slot] = Number.isNaN(elementsMask) ? 0 : elementsMask >>> 0;
+    let cosineNormSq = 0;
+    let weightedNormSq = 0;
+    let plainTotal = 0;
+    for (let i = 0; i < length; i++) {
+      const mz = view.mz[i] as number;
+      const relIntensity = view.relIntensity[i] as number;
+      this.peakMz[this.peakCount + i] = mz;
+      this.peakRelIntensity[this.peakCount + i] = relIntensity;
+      const w = mz * mz * mz * postingWeight(relIntensity);
+      cosineNormSq += relIntensity * relIntensity;
+      weightedNormSq += w * w;
+      plainTotal += relIntensity;
+    }
+    const weights = entropyWeights(view, true);
+    this.slot.cosineNormSq[slot] = cosineNormSq;
+    this.slot.weightedNormSq[slot] = weightedNormSq;
+    this.slot.entropyExponent[slot] = weights.exponent / STEIN_SCOTT_INTENSITY_POWER;
+    this.slot.entropyLnTotal[slot] = Math.log(weights.total);
+    this.slot.plainLnTotal[slot] = Math.log(plainTotal);
+    this.peakCount += length;
+    this.slotCount++;
+    this.liveCount++;
+    this.slotById.set(id, slot);
+    this.deltaDirty = true;
+  }
+
+  /**
+   * Removes a spectrum.
+   * @returns true if it was there.
+   */
+  remove(id: number): boolean {
+    const slot = this.slotById.get(id);
+    if (slot === undefined) return false;
+    this.slotById.delete(id);
+    this.slot.alive[slot] = 0;
+    this.liveCount--;
+    this.deadCount++;
+    return true;
+  }
+
+  /**
+   * Packs every spectrum into exactly sized arrays and one set of posting lists, dropping removed
+   * spectra. Searches do this on their own when needed; call it after a bulk load to pay the cost once.
+   */
+  pack(): void {
+    this.compactSlots();
+    this.main = this.buildLists(0, this.slotCount);
+    this.mainSlotEnd = this.slotCount;
+    this.delta = emptyLists();
+    this.deltaDirty = false;
+  }
+
+  /** Bytes held by the index and by its search scratch. */
+  memory(): SpectrumIndexMemory {
+    const bytes = (arrays: PackedArray[]): number => arrays.reduce((total, array) => total + array.byteLength, 0);
+    const lists = (l: PostingLists): PackedArray[] => [l.offsets, l.slots, l.weights];
+    const s = this.scratch;
+    return {
+      indexBytes: bytes([
+        ...Object.values(this.slot),
+        this.peakMz,
+        this.peakRelIntensity,
+        ...lists(this.main),
+        ...lists(this.delta),
+      ]),
+      scratchBytes: s === undefined ? 0 : bytes([s.count, s.sum, s.queryNormSq, s.ratioSum, s.lastRatio, s.upper, s.lower, s.checked]),
+      peakCount: this.peakCount,
+    };
+  }
+
+  /**
+   * The exact top-k library spectra for a query.
+   *
+   * @param query - the unknown spectrum; normalised as {@link compareSpectra} does; not changed.
+   * @param options - method, reverse, k and filters ({@link SpectrumSearchOptions}).
+   * @returns hits ranked by score (by `reverseScore` in reverse mode) descending, then id ascending.
+   *   `score` = compareSpectra(query, spectrum, { method }).score; `reverseScore` (reverse mode only) =
+   *   compareSpectra(query, spectrum, { method, reverse: true }).score.
+   * @throws {ChemError} `INVALID_PEAKS` / `EMPTY_SPECTRUM` (fields `query…`), `INVALID_ARGUMENT` for options.
+   */
+  search(query: PeakList, options: SpectrumSearchOptions = {}): SpectrumHit[] {
+    const search = resolveSearchOptions(options, { method: this.defaultMethod, k: this.defaultK });
+    const queryView = prepareSpectrum(query, 'query');
+    this.refresh();
+    const scratch = this.ensureScratch();
+    try {
+      const totals = this.accumulate(queryView, search, scratch);
+      const norms = { cosineNormSq: this.slot.cosineNormSq, weightedNormSq: this.slot.weightedNormSq };
+      computeScoreBounds(search.method, search.reverse, scratch, this.slotCount, norms, totals, scratch.upper, scratch.lower);
+      const hits = selectTopHits({
+        slotCount: this.slotCount,
+        upper: scratch.upper,
+        lower: scratch.lower,
+        checked: scratch.checked,
+        k: search.k,
+        idOf: (slot) => this.slot.ids[slot] as number,
+        passes: (slot) => this.passes(slot, search),
+        exactScore: (slot) => scoreSpectrumViews(queryView, this.viewOf(slot), search.method, search.reverse),
+      });
+      return hits.map((hit) => {
+        const matchedPeakCount = scratch.count[hit.slot] as number;
+        if (!search.reverse) return { id: hit.id, score: hit.score, matchedPeakCount };
+        const score = scoreSpectrumViews(queryView, this.viewOf(hit.slot), search.method, false);
+        return { id: hit.id, score, reverseScore: hit.score, matchedPeakCount };
+      });
+    } finally {
+      scratch.count.fill(0, 0, this.slotCount);
+      scratch.checked.fill(0, 0, this.slotCount);
+    }
+  }
+
+  private passes(slot: number, search: ResolvedSearch): boolean {
+    if (this.slot.alive[slot] === 0) return false;
+    const metaOk = passesMetaFilters(
+      search,
+      this.slot.nominalMass[slot] as number,
+      this.slot.retentionIndex[slot] as number,
+      this.slot.elementsMask[slot] as number,
+    );
+    return metaOk && (search.filter === undefined || search.filter(this.slot.ids[slot] as number) === true);
+  }
+
+  private viewOf(slot: number): SpectrumView {
+    const start = this.slot.start[slot] as number;
+    return { mz: this.peakMz, relIntensity: this.peakRelIntensity, start, end: start + (this.slot.length[slot] as number) };
+  }
+
+  private accumulate(queryView: SpectrumView, search: ResolvedSearch, acc: Accumulators): QueryTotals {
+    const tiers = [this.main, this.delta];
+    const totals: QueryTotals = { peakCount: queryView.end - queryView.start, cosineNormSq: 0, weightedNormSq: 0 };
+    const entropyWeighted = search.method === 'entropy';
+    const queryEntropy = entropyWeights(queryView, entropyWeighted);
+    const slotWeights: EntropySlotWeights = entropyWeighted
+      ? { exponents: this.slot.entropyExponent, lnTotals: this.slot.entropyLnTotal }
+      : { exponents: undefined, lnTotals: this.slot.plainLnTotal };
+    for (let i = queryView.start; i < queryView.end; i++) {
+      const mz = queryView.mz[i] as number;
+      const u = queryView.relIntensity[i] as number;
+      const q = postingWeight(u);
+      const w = mz * mz * mz * q;
+      totals.cosineNormSq += u * u;
+      totals.weightedNormSq += w * w;
+      const probability = Math.exp(queryEntropy.exponent * Math.log(u)) / queryEntropy.total;
+      for (const tier of tiers) {
+        if (search.method === 'cosine') accumulateCosine(tier, acc, mz, u);
+        else if (search.method === 'weighted' || search.method === 'composite') accumulateWeighted(tier, acc, mz, w, q);
+        else accumulateEntropy(tier, acc, mz, probability, slotWeights, search.reverse);
+      }
+    }
+    return totals;
+  }
+
+  private refresh(): void {
+    const pending = this.slotCount - this.mainSlotEnd;
+    const limit = Math.max(1024, this.slotCount >> 3);
+    if (pending > limit || this.deadCount > limit) this.pack();
+    else if (this.deltaDirty) {
+      this.delta = this.buildLists(this.mainSlotEnd, this.slotCount);
+      this.deltaDirty = false;
+    }
+  }
+
+  private buildLists(fromSlot: number, toSlot: number): PostingLists {
+    const offsets = new Uint32Array(OFFSET_COUNT);
+    for (let slot = fromSlot; slot < toSlot; slot++) {
+      if (this.slot.alive[slot] === 0) continue;
+      const start = this.slot.start[slot] as number;
+      const end = start + (this.slot.length[slot] as number);
+      for (let p = start; p < end; p++) {
+        const next = (this.peakMz[p] as number) + 1;
+        offsets[next] = (offsets[next] as number) + 1;
+      }
+    }
+    for (let mz = 1; mz < OFFSET_COUNT; mz++) offsets[mz] = (offsets[mz] as number) + (offsets[mz - 1] as number);
+    const total = offsets[OFFSET_COUNT - 1] as number;
+    const slots = new Uint32Array(total);
+    const weights = new Float32Array(total);
+    const cursor = offsets.slice();
+    for (let slot = fromSlot; slot < toSlot; slot++) {
+      if (this.slot.alive[slot] === 0) continue;
+      const start = this.slot.start[slot] as number;
+      const end = start + (this.slot.length[slot] as number);
+      for (let p = start; p < end; p++) {
+        const mz = this.peakMz[p] as number;
+        const position = cursor[mz] as number;
+        cursor[mz] = position + 1;
+        slots[position] = slot;
+        weights[position] = postingWeight(this.peakRelIntensity[p] as number);
+      }
+    }
+    return { offsets, slots, weights };
+  }
+
+  private compactSlots(): void {
+    const keep: number[] = [];
+    let peaks = 0;
+    for (let slot = 0; slot < this.slotCount; slot++) {
+      if (this.slot.alive[slot] === 1) {
+        keep.push(slot);
+        peaks += this.slot.length[slot] as number;
+      }
+    }
+    const n = keep.length;
+    const pick = <T extends PackedArray>(array: T): T => {
+      const out = new (array.constructor as new (length: number) => T)(n);
+      keep.forEach((slot, i) => (out[i] = array[slot] as number));
+      return out;
+    };
+    const peakMz = new Uint16Array(peaks);
+    const peakRelIntensity = new Float32Array(peaks);
+    const slotStart = new Uint32Array(n);
+    let cursor = 0;
+    keep.forEach((slot, i) => {
+      const start = this.slot.start[slot] as number;
+      const end = start + (this.slot.length[slot] as number);
+      peakMz.set(this.peakMz.subarray(start, end), cursor);
+      peakRelIntensity.set(this.peakRelIntensity.subarray(start, end), cursor);
+      slotStart[i] = cursor;
+      cursor += end - start;
+    });
+    this.slot = { ...mapSlotColumns(this.slot, pick), start: slotStart };
+    this.peakMz = peakMz;
+    this.peakRelIntensity = peakRelIntensity;
+    this.slotCount = n;
+    this.peakCount = peaks;
+    this.deadCount = 0;
+    this.slotById.clear();
+    keep.forEach((_, i) => this.slotById.set(this.slot.ids[i] as number, i));
+    this.scratch = undefined;
+  }
+
+  private ensureSlotCapacity(n: number): void {
+    this.slot = mapSlotColumns(this.slot, (column) => growTypedArray(column, n));
+  }
+
+  private ensurePeakCapacity(n: number): void {
+    this.peakMz = growTypedArray(this.peakMz, n);
+    this.peakRelIntensity = growTypedArray(this.peakRelIntensity, n);
+  }
+
+  private ensureScratch(): NonNullable<SpectrumIndex['scratch']> {
+    const n = this.slotCount;
+    if (this.scratch !== undefined && this.scratch.count.length >= n) return this.scratch;
+    const length = Math.max(n, 16);
+    this.scratch = {
+      count: new Uint32Array(length),
+      sum: new Float64Array(length),
+      queryNormSq: new Float64Array(length),
+      ratioSum: new Float64Array(length),
+      lastRatio: new Float64Array(length),
+      upper: new Float64Array(length),
+      lower: new Float64Array(length),
+      checked: new Uint8Array(length),
+    };
+    return this.scratch;
+  }
+}
+
+/**
+ * Creates an empty {@link SpectrumIndex}.
+ * @example
+ * const index = createSpectrumIndex({ method: 'cosine' });
+ */
+export function createSpectrumIndex(options: SpectrumIndexOptions = {}): SpectrumIndex {
+  return new SpectrumIndex(options);
+}
