@@ -275,6 +275,12 @@ export function suggestFormulas(
   }
   const masses = {} as Record<ElementSymbol, number>;
   for (const symbol of Object.keys(ranges) as ElementSymbol[]) masses[symbol] = elementNominalMass(symbol);
+  // Most mass that the elements from REST[d] on can still supply: branches that leave more are dead.
+  const maxFillDa = new Float64Array(REST.length + 1);
+  for (let d = REST.length - 1; d >= 0; d--) {
+    const symbol = REST[d] as ElementSymbol;
+    maxFillDa[d] = (maxFillDa[d + 1] as number) + ranges[symbol][1] * (masses[symbol] as number);
+  }
 
   const best: Candidate[] = [];
   const c: CountsVector = { C: 0, H: 0, N: 0, O: 0, S: 0, Cl: 0, Br: 0, F: 0, Si: 0, P: 0, I: 0 };
@@ -346,6 +352,7 @@ export function suggestFormulas(
     for (let n = min; n <= max; n++) {
       const left = remainingDa - n * massDa;
       if (left < 0) break;
+      if (left > (maxFillDa[depth + 1] as number)) continue; // more of this element may still fit it
       c[symbol] = n;
       // The prior's element terms bound every score below this branch and only fall as n grows.
       if (best.length >= limit && elementPriorOf(c) <= (best[best.length - 1] as Candidate).score) break;
