@@ -98,7 +98,9 @@ export function agreementFromChiSquare(chi2: number): number {
  * @throws {ChemError} `INVALID_ARGUMENT` naming the field for bad peaks or an empty window
  * @throws {RangeError} when `monoisotopicMz` is not a positive integer
  * @example
- * clusterAgreement(isotopeCluster('CH2Cl2'), [{ mz: 84, relIntensity: 100 }, { mz: 86, relIntensity: 64 }], 84) // ≈ 0.99
+ * const observed = [{ mz: 84, relIntensity: 100 }, { mz: 85, relIntensity: 1.1 }, { mz: 86, relIntensity: 64 }, { mz: 88, relIntensity: 10 }];
+ * clusterAgreement(isotopeCluster('CH2Cl2'), observed, 84) // ≈ 0.90 (M+3 and M+5 missing, M+4 a little low)
+ * clusterAgreement(isotopeCluster('CH2Cl2'), observed.slice(0, 3), 84) // ≈ 0.00003 (no M+4)
  */
 export function clusterAgreement(
   theoretical: readonly ClusterPeak[],

@@ -186,9 +186,12 @@ function rulesPassed(c: CountsVector, agreement: number | null): GoldenRule[] {
  * CCl4 or CS2 break them — but lower its prior and are missing from `rulesPassed`.
  *
  * Ranking: with an observed cluster, by `−χ²/2 + prior` where χ² is the window statistic behind
- * `clusterAgreement` (so agreement dominates) and the prior is {@link formulaLogPrior}; without one,
- * by the prior alone. Branches whose cluster ratios to M already exceed the observed ones by more
- * than 5 noise widths are not enumerated (adding atoms only raises those ratios).
+ * `clusterAgreement` and the prior is a documented plausibility heuristic (suggest/formula-prior.ts:
+ * H/C near typical, soft-rule failures, elements the cluster cannot show); without a cluster, by the
+ * prior alone. Pruning, all safe or stated: ratios M+k / M only grow as atoms are added, so branches
+ * already more than 5 noise widths above the observed ratios, or unable to reach them even with the
+ * most of every element still to come, are skipped; so are branches whose best possible prior cannot
+ * enter the list, and branches whose remaining mass no element range can fill.
  *
  * @param nominalMassDa - nominal mass of M (lightest isotopes), integer 1 … {@link MAX_SUGGEST_MASS_DA}
  * @param constraints - element ranges, observed cluster, number of results (not changed)
