@@ -42,9 +42,14 @@ export const routes: RouteObject[] = [
           page(paths.library.path, () => import('./routes/library/library')),
           page(paths.entry.path, () => import('./routes/entries/entry')),
           page(paths.editions.path, () => import('./routes/editions/editions')),
+          page(paths.edition.path, () => import('./routes/editions/edition')),
           page(paths.overview.path, () => import('./routes/overview/overview')),
           onlyFor(paths.submit.minRole, [page(paths.submit.path, () => import('./routes/submit/submit'))]),
-          onlyFor(paths.review.minRole, [page(paths.review.path, () => import('./routes/review/review-desk'))]),
+          onlyFor(paths.review.minRole, [
+            page(paths.review.path, () => import('./routes/review/review-desk')),
+            page(paths.reviewImport.path, () => import('./routes/review/bulk-import')),
+            page(paths.reviewRevision.path, () => import('./routes/review/review-revision')),
+          ]),
           onlyFor('admin', [
             {
               path: '/admin',
@@ -55,8 +60,16 @@ export const routes: RouteObject[] = [
                 page(paths.adminUsers.path, () => import('./routes/admin/users')),
                 page(paths.adminKeys.path, () => import('./routes/admin/access-keys')),
                 page(paths.adminOutbox.path, () => import('./routes/admin/outbox')),
-                page(paths.adminAudit.path, () => import('./routes/admin/audit-log')),
               ],
+            },
+          ]),
+          // Curators read the audit log too (PRODUCT.md), so it sits outside the admin-only group.
+          onlyFor(paths.adminAudit.minRole, [
+            {
+              path: '/admin',
+              element: <AdminSection />,
+              errorElement: <RouteError />,
+              children: [page(paths.adminAudit.path, () => import('./routes/admin/audit-log'))],
             },
           ]),
           { path: '*', element: <NotFound />, errorElement: <RouteError /> },

@@ -14,12 +14,15 @@ export const paths = {
   entry: { path: '/entries/:accession', label: 'Entry', minRole: 'reader' },
   submit: { path: '/submit', label: 'Submit', minRole: 'contributor' },
   review: { path: '/review', label: 'Review desk', minRole: 'curator' },
+  reviewImport: { path: '/review/import', label: 'Bulk import', minRole: 'curator' },
+  reviewRevision: { path: '/review/:revisionId', label: 'Revision under review', minRole: 'curator' },
   editions: { path: '/editions', label: 'Editions', minRole: 'reader' },
+  edition: { path: '/editions/:label', label: 'Edition', minRole: 'reader' },
   overview: { path: '/overview', label: 'Overview', minRole: 'reader' },
   adminUsers: { path: '/admin/users', label: 'Users', minRole: 'admin' },
   adminKeys: { path: '/admin/keys', label: 'Access keys', minRole: 'admin' },
   adminOutbox: { path: '/admin/outbox', label: 'Outbox', minRole: 'admin' },
-  adminAudit: { path: '/admin/audit', label: 'Audit log', minRole: 'admin' },
+  adminAudit: { path: '/admin/audit', label: 'Audit log', minRole: 'curator' },
   signIn: { path: '/sign-in', label: 'Sign in', minRole: 'reader' },
 } as const satisfies Record<string, Screen>;
 
@@ -45,6 +48,21 @@ export const adminNavigation: readonly Screen[] = [
 /** The page an entry lives on, e.g. `/entries/IF-000123`. */
 export function entryHref(accession: string): string {
   return `/entries/${encodeURIComponent(accession)}`;
+}
+
+/** One past or current revision of an entry, e.g. `/entries/IF-000123?revision=2`. */
+export function entryRevisionHref(accession: string, revision: number): string {
+  return `${entryHref(accession)}?revision=${revision}`;
+}
+
+/** A revision on the review desk. */
+export function reviewRevisionHref(revisionId: string): string {
+  return `/review/${encodeURIComponent(revisionId)}`;
+}
+
+/** One edition's page, e.g. `/editions/2026.12`. */
+export function editionHref(label: string): string {
+  return `/editions/${encodeURIComponent(label)}`;
 }
 
 /** The sign-in page, remembering where to come back to (only same-site paths are kept). */

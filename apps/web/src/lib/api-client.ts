@@ -26,6 +26,8 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
 type RequestOptions = {
   body?: unknown;
+  /** A multipart body (file uploads); the browser sets its Content-Type with the boundary. */
+  form?: FormData;
   signal?: AbortSignal | undefined;
 };
 
@@ -55,8 +57,9 @@ function errorFrom(response: Response, body: unknown): ApiError {
 async function request(method: Method, url: string, options: RequestOptions): Promise<unknown> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (method !== 'GET') {
-    // The API requires both on cookie-authenticated writes (a CSRF guard): a cross-site form cannot set them.
-    headers['Content-Type'] = 'application/json';
+    // The API requires X-Requested-With on cookie-authenticated writes (a CSRF guard): a cross-site form
+    // cannot set it. JSON writes also name their type; a multipart body must leave it to the browser.
+    if (options.form === undefined) headers['Content-Type'] = 'application/json';
     headers['X-Requested-With'] = 'ionfolio';
   }
   let response: Response;
@@ -65,7 +68,7 @@ async function request(method: Method, url: string, options: RequestOptions): Pr
       method,
       headers,
       credentials: 'include',
-      body: options.body === undefined ? null : JSON.stringify(options.body),
+      body: options.form ?? (options.body === undefined ? null : JSON.stringify(options.body)),
       signal: options.signal ?? null,
     });
   } catch (cause) {
@@ -103,6 +106,10 @@ export const apiClient = {
   },
   patch<S extends z.ZodType>(url: string, schema: S, options: RequestOptions = {}) {
     return parsed(schema, request('PATCH', url, options));
+  },
+  /** A multipart POST (a file upload), answered with JSON. */
+  postForm<S extends z.ZodType>(url: string, schema: S, form: FormData, options: Omit<RequestOptions, 'body' | 'form'> = {}) {
+    return parsed(schema, request('POST', url, { ...options, form }));
   },
   /** A write whose answer has no body (204). */
   async send(method: Exclude<Method, 'GET'>, url: string, options: RequestOptions = {}): Promise<void> {
