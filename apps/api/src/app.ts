@@ -16,6 +16,8 @@ import { healthRoutes } from './modules/health/health.routes';
 import { authRoutes } from './modules/auth/auth.routes';
 import { configurePassport } from './modules/auth/auth.service';
 import { usersRoutes } from './modules/users/users.routes';
+import { entriesRoutes } from './modules/entries/entries.routes';
+import { reviewsRoutes } from './modules/reviews/reviews.routes';
 
 export interface AppDeps {
   env: Env;
@@ -87,7 +89,7 @@ export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Ex
 
   app.use('/api', healthRoutes(dataSource));
   app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN }));
-  app.use('/api/v1', csrfGuard, usersRoutes(dataSource));
+  app.use('/api/v1', csrfGuard, usersRoutes(dataSource), entriesRoutes(dataSource), reviewsRoutes(dataSource));
   app.use(['/api', '/auth'], apiNotFound);
 
   // The built web app, with history fallback for client-side routes.

@@ -2,10 +2,14 @@ import { DataSource } from 'typeorm';
 import { UserEntity } from '../modules/users/user.entity';
 import { AuditEventEntity } from '../modules/audit/audit-event.entity';
 import { MailMessageEntity } from '../modules/mail/mail-message.entity';
+import { EntryEntity } from '../modules/entries/entry.entity';
+import { RevisionEntity } from '../modules/entries/revision.entity';
+import { ReviewCommentEntity } from '../modules/reviews/review-comment.entity';
 import { Foundation1764640000000 } from './migrations/1764640000000-foundation';
+import { Curation1764641000000 } from './migrations/1764641000000-curation';
 
-export const entities = [UserEntity, AuditEventEntity, MailMessageEntity];
-export const migrations = [Foundation1764640000000];
+export const entities = [UserEntity, AuditEventEntity, MailMessageEntity, EntryEntity, RevisionEntity, ReviewCommentEntity];
+export const migrations = [Foundation1764640000000, Curation1764641000000];
 
 /** Builds the one DataSource of the API. Schema changes are migrations; `synchronize` stays off. */
 export function createDataSource(databaseUrl: string): DataSource {

@@ -1,0 +1,2 @@
+export * from './revision-content';
+export * from './curation';
