@@ -30,8 +30,13 @@ interface Traits {
   benzoyl: boolean;
   chloromethyl: boolean;
   bromomethyl: boolean;
+  phthalate: boolean;
   acyclic: boolean;
   terpenoid: boolean;
+  halogenated: boolean;
+  saturatedChain: boolean;
+  /** Share of heavy atoms that are aromatic (0–1), from the SMILES; 1 when guessed from the formula. */
+  aromaticShare: number;
 }
 
 /** A fragment rule: a neutral loss from M or an ion, with an intensity range before normalising. */
@@ -41,6 +46,8 @@ interface Rule {
   /** Intensity range (base peak ~100) from which the compound's pattern draws one value. */
   weight: readonly [min: number, max: number];
   when: (t: Traits) => boolean;
+  /** A characteristic fragment, always kept; other rules are kept with probability 0.85 for variety. */
+  core?: boolean;
 }
 
 const always = (): boolean => true;
@@ -52,6 +59,9 @@ function readTraits(counts: ElementCounts, smiles: string | undefined): Traits {
   const s = smiles ?? '';
   const aromatic = smiles === undefined ? rdbe(counts) >= 4 && c >= 6 : /c/.test(s);
   const acyclic = smiles !== undefined && !/\d/.test(s.replace(/\[[^\]]*\]/g, ''));
+  const heavyAtoms = Object.entries(counts).reduce((n, [symbol, count]) => (symbol === 'H' ? n : n + (count ?? 0)), 0);
+  const aromaticAtoms = (s.match(/[cnos]/g) ?? []).length;
+  const ring = rdbe(counts);
   return {
     aromatic,
     // O ending a branch or the string, or opening it, not as =O or a ring bond.
@@ -66,12 +76,16 @@ function readTraits(counts: ElementCounts, smiles: string | undefined): Traits {
     tms: /\[Si\]\(C\)\(C\)C|C\[Si\]\(C\)\(C\)/.test(s),
     nitro: /\[N\+\]\(\[O-\]\)|\[N\+\]\(=O\)\[O-\]/.test(s),
     nitrile: /C#N|N#C/.test(s),
-    gemDimethyl: /C\(C\)\(C\)|\(C\)C\(C\)|CC\(C\)\(/.test(s) || /^CC\(C\)/.test(s),
+    gemDimethyl: /\(C\)\(C\)|C\d\(C\)|C\(C\)\(/.test(s),
     benzoyl: /C\(=O\)c|c1ccccc1C\(=O\)|O=C\(c|\)c1ccccc1$/.test(s) && /c1ccccc1/.test(s) && /C\(=O\)|O=C\(/.test(s),
     chloromethyl: /CCl|ClC[^l]|ClC$/.test(s),
     bromomethyl: /CBr|BrC/.test(s),
+    phthalate: /c1ccccc1C\(=O\)O/.test(s) && (counts.O ?? 0) >= 4,
     acyclic,
-    terpenoid: !aromatic && c >= 9 && c <= 16 && h >= c + 2,
+    terpenoid: !aromatic && c >= 9 && c <= 16 && h >= c + 2 && ring >= 2,
+    halogenated: (counts.Cl ?? 0) + (counts.Br ?? 0) > 0,
+    saturatedChain: ring <= 2 && h >= 2 * c - 2,
+    aromaticShare: smiles === undefined ? (aromatic ? 1 : 0) : heavyAtoms === 0 ? 0 : aromaticAtoms / heavyAtoms,
   };
 }
 
@@ -84,30 +98,30 @@ function readTraits(counts: ElementCounts, smiles: string | undefined): Traits {
 const RULES: readonly Rule[] = [
   { kind: 'loss', atoms: f('H'), weight: [3, 25], when: (t) => t.aldehyde || t.aromatic },
   { kind: 'loss', atoms: f('CH3'), weight: [3, 25], when: (t) => !t.tms && !t.gemDimethyl },
-  { kind: 'loss', atoms: f('CH3'), weight: [20, 75], when: (t) => !t.tms && t.gemDimethyl },
-  { kind: 'loss', atoms: f('CH3'), weight: [60, 100], when: (t) => t.tms },
+  { kind: 'loss', atoms: f('CH3'), weight: [10, 50], when: (t) => !t.tms && t.gemDimethyl },
+  { kind: 'loss', atoms: f('CH3'), weight: [60, 100], when: (t) => t.tms, core: true },
   { kind: 'loss', atoms: f('OH'), weight: [5, 25], when: (t) => t.acid || (t.hydroxyl && t.aromatic) },
-  { kind: 'loss', atoms: f('H2O'), weight: [10, 50], when: (t) => t.hydroxyl && !t.aromatic },
-  { kind: 'loss', atoms: f('CO'), weight: [8, 40], when: (t) => t.aromatic && !t.tms },
+  { kind: 'loss', atoms: f('H2O'), weight: [10, 50], when: (t) => t.hydroxyl && !t.aromatic && !t.acid },
+  { kind: 'loss', atoms: f('CO'), weight: [8, 40], when: (t) => t.aromatic && !t.tms && !t.nitro },
   { kind: 'loss', atoms: f('C2H4'), weight: [8, 40], when: (t) => t.ethoxy },
   { kind: 'loss', atoms: f('CHO'), weight: [5, 40], when: (t) => t.aldehyde || (t.hydroxyl && t.aromatic) },
   { kind: 'loss', atoms: f('C2H5'), weight: [5, 30], when: (t) => t.acyclic && !t.aromatic },
   { kind: 'loss', atoms: f('CH2O'), weight: [5, 20], when: (t) => t.methoxy && t.aromatic },
-  { kind: 'loss', atoms: f('CH3O'), weight: [10, 60], when: (t) => t.methoxy },
+  { kind: 'loss', atoms: f('CH3O'), weight: [10, 60], when: (t) => t.methoxy, core: true },
   { kind: 'loss', atoms: f('HS'), weight: [5, 30], when: (t) => t.thiol },
   { kind: 'loss', atoms: f('H2S'), weight: [5, 30], when: (t) => t.thiol },
-  { kind: 'loss', atoms: f('Cl'), weight: [15, 90], when: always },
+  { kind: 'loss', atoms: f('Cl'), weight: [15, 90], when: always, core: true },
   { kind: 'loss', atoms: f('HCl'), weight: [3, 20], when: always },
   { kind: 'loss', atoms: f('C2H2O'), weight: [5, 30], when: (t) => t.acetyl || t.acetate },
   { kind: 'loss', atoms: f('C3H7'), weight: [5, 40], when: (t) => t.gemDimethyl && !t.tms },
   { kind: 'loss', atoms: f('C2H3O'), weight: [10, 50], when: (t) => t.acetyl },
   { kind: 'loss', atoms: f('C2H5O'), weight: [10, 60], when: (t) => t.ethoxy },
   { kind: 'loss', atoms: f('CHO2'), weight: [10, 40], when: (t) => t.acid },
-  { kind: 'loss', atoms: f('C2H4O2'), weight: [10, 80], when: (t) => t.acetate },
-  { kind: 'loss', atoms: f('NO2'), weight: [30, 90], when: (t) => t.nitro },
+  { kind: 'loss', atoms: f('C2H4O2'), weight: [10, 80], when: (t) => t.acetate, core: true },
+  { kind: 'loss', atoms: f('NO2'), weight: [30, 90], when: (t) => t.nitro, core: true },
   { kind: 'loss', atoms: f('NO'), weight: [5, 20], when: (t) => t.nitro },
   { kind: 'loss', atoms: f('HCN'), weight: [10, 40], when: (t) => t.nitrile || (t.aromatic && !t.nitro) },
-  { kind: 'loss', atoms: f('Br'), weight: [25, 100], when: always },
+  { kind: 'loss', atoms: f('Br'), weight: [25, 100], when: always, core: true },
   { kind: 'loss', atoms: f('HBr'), weight: [3, 15], when: always },
   { kind: 'ion', atoms: f('CH3'), weight: [1, 8], when: always },
   { kind: 'ion', atoms: f('C2H3'), weight: [5, 30], when: (t) => !t.aromatic },
@@ -117,25 +131,26 @@ const RULES: readonly Rule[] = [
   { kind: 'ion', atoms: f('C3H3'), weight: [5, 25], when: always },
   { kind: 'ion', atoms: f('C3H5'), weight: [10, 60], when: (t) => !t.aromatic },
   { kind: 'ion', atoms: f('C3H7'), weight: [10, 90], when: (t) => !t.aromatic && !t.acetyl && !t.acetate },
-  { kind: 'ion', atoms: f('C2H3O'), weight: [40, 100], when: (t) => t.acetyl || t.acetate },
+  { kind: 'ion', atoms: f('C2H3O'), weight: [40, 100], when: (t) => t.acetyl || t.acetate, core: true },
   { kind: 'ion', atoms: f('CH3S'), weight: [10, 50], when: always },
   { kind: 'ion', atoms: f('CH2Cl'), weight: [10, 50], when: (t) => t.chloromethyl },
   { kind: 'ion', atoms: f('C4H3'), weight: [5, 25], when: (t) => t.aromatic },
   { kind: 'ion', atoms: f('C4H7'), weight: [10, 60], when: (t) => !t.aromatic },
-  { kind: 'ion', atoms: f('C4H9'), weight: [10, 80], when: (t) => !t.aromatic || t.gemDimethyl },
+  { kind: 'ion', atoms: f('C4H9'), weight: [10, 80], when: (t) => (!t.aromatic && t.saturatedChain) || t.gemDimethyl },
   { kind: 'ion', atoms: f('C5H5'), weight: [5, 30], when: (t) => t.aromatic },
   { kind: 'ion', atoms: f('C5H7'), weight: [10, 40], when: (t) => t.terpenoid },
   { kind: 'ion', atoms: f('C5H9'), weight: [10, 100], when: (t) => t.terpenoid || t.acyclic },
   { kind: 'ion', atoms: f('C5H11'), weight: [5, 40], when: (t) => t.acyclic && !t.aromatic },
-  { kind: 'ion', atoms: f('C3H9Si'), weight: [40, 100], when: (t) => t.tms },
+  { kind: 'ion', atoms: f('C3H9Si'), weight: [40, 100], when: (t) => t.tms, core: true },
   { kind: 'ion', atoms: f('C2H7OSi'), weight: [10, 40], when: (t) => t.tms },
   { kind: 'ion', atoms: f('C6H5'), weight: [10, 50], when: (t) => t.aromatic },
   { kind: 'ion', atoms: f('C6H7'), weight: [5, 35], when: (t) => t.terpenoid },
   { kind: 'ion', atoms: f('C6H9'), weight: [5, 35], when: (t) => t.terpenoid },
-  { kind: 'ion', atoms: f('C7H7'), weight: [20, 100], when: (t) => t.aromatic },
-  { kind: 'ion', atoms: f('C7H9'), weight: [20, 100], when: (t) => t.terpenoid },
+  { kind: 'ion', atoms: f('C7H7'), weight: [20, 100], when: (t) => t.aromatic, core: true },
+  { kind: 'ion', atoms: f('C7H9'), weight: [20, 100], when: (t) => t.terpenoid, core: true },
   { kind: 'ion', atoms: f('CH2Br'), weight: [5, 30], when: (t) => t.bromomethyl },
-  { kind: 'ion', atoms: f('C7H5O'), weight: [40, 100], when: (t) => t.benzoyl },
+  { kind: 'ion', atoms: f('C7H5O'), weight: [60, 100], when: (t) => t.benzoyl && !t.phthalate, core: true },
+  { kind: 'ion', atoms: f('C8H5O3'), weight: [80, 100], when: (t) => t.phthalate, core: true },
   { kind: 'ion', atoms: f('C8H9'), weight: [10, 40], when: (t) => t.aromatic },
   { kind: 'ion', atoms: f('C8H9O'), weight: [20, 80], when: (t) => t.methoxy && t.aromatic },
 ];
@@ -157,8 +172,13 @@ function subtract(whole: ElementCounts, part: ElementCounts): ElementCounts {
 /** Intensity of the most intense molecular-ion peak, before normalising (base peak ~100). */
 function molecularIonRange(t: Traits, counts: ElementCounts): readonly [number, number] {
   if (t.tms) return [3, 15];
-  if (t.aromatic) return [40, 100];
+  if (t.aromatic) {
+    // A small ring on a big molecule holds the charge less well: scale by the aromatic share.
+    const share = Math.min(1, Math.max(0.05, 1.5 * t.aromaticShare));
+    return [40 * share, 100 * share];
+  }
   if (t.hydroxyl || t.acetate) return [1.5, 6];
+  if (t.halogenated) return [5, 30];
   if (t.acyclic && (counts.C ?? 0) >= 6) return [3, 15];
   return [10, 45];
 }
@@ -232,11 +252,11 @@ export function simulateSpectrum(
   for (const rule of RULES) {
     // Draw for every rule, so one rule's outcome never shifts another's values.
     const weight = draw(rule.weight) * variantFactor();
-    const keep = pattern() < 0.85;
+    const keep = rule.core === true || pattern() < 0.85;
     if (!keep || !rule.when(traits) || !contains(counts, rule.atoms)) continue;
     const atoms = rule.kind === 'loss' ? subtract(counts, rule.atoms) : rule.atoms;
     const mz = nominalMass(atoms);
-    if (Object.keys(atoms).length === 0 || mz < 12 || mz > massDa - 1) continue;
+    if (Object.keys(atoms).length === 0 || mz < 15 || mz > massDa - 1) continue;
     if (rule.kind === 'ion' && Object.keys(subtract(counts, atoms)).length === 0) continue;
     clusters.push({ atoms, top: weight });
   }
