@@ -18,6 +18,11 @@ import { configurePassport } from './modules/auth/auth.service';
 import { usersRoutes } from './modules/users/users.routes';
 import { entriesRoutes } from './modules/entries/entries.routes';
 import { reviewsRoutes } from './modules/reviews/reviews.routes';
+import { editionsRoutes } from './modules/editions/editions.routes';
+import { uploadsRoutes } from './modules/uploads/uploads.routes';
+import { structuresRoutes } from './modules/structures/structures.routes';
+import { importsRoutes } from './modules/imports/imports.routes';
+import { adminRoutes } from './modules/admin/admin.routes';
 
 export interface AppDeps {
   env: Env;
@@ -89,7 +94,18 @@ export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Ex
 
   app.use('/api', healthRoutes(dataSource));
   app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN }));
-  app.use('/api/v1', csrfGuard, usersRoutes(dataSource), entriesRoutes(dataSource), reviewsRoutes(dataSource));
+  app.use(
+    '/api/v1',
+    csrfGuard,
+    usersRoutes(dataSource),
+    entriesRoutes(dataSource),
+    reviewsRoutes(dataSource),
+    editionsRoutes(dataSource),
+    uploadsRoutes(),
+    structuresRoutes(),
+    importsRoutes(dataSource, logger),
+    adminRoutes(dataSource),
+  );
   app.use(['/api', '/auth'], apiNotFound);
 
   // The built web app, with history fallback for client-side routes.

@@ -41,6 +41,15 @@ export const errorMiddleware: ErrorRequestHandler = (err: unknown, req, res, _ne
     res.status(err.status).json(body(err.code, err.message, err.details));
     return;
   }
+  if (err instanceof Error && err.name === 'MulterError') {
+    const code = (err as Error & { code?: string }).code;
+    if (code === 'LIMIT_FILE_SIZE') {
+      res.status(413).json(body('FILE_TOO_LARGE', 'The file is larger than the 20 MB an upload may be'));
+    } else {
+      res.status(400).json(body('BAD_UPLOAD', `The upload was refused: ${err.message}`));
+    }
+    return;
+  }
   const e = (err ?? {}) as HttpishError;
   const status = e.status ?? e.statusCode;
   if (typeof status === 'number' && status >= 400 && status < 500) {
