@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { DecisionBody } from '@ionfolio/contracts';
 import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
-import { reviewQueueKey } from './get-review-queue';
+import { invalidateReviewData } from './invalidate-review-data';
 import { revisionViewSchema } from './revision-view';
 
 const decisionResponseSchema = z.object({ revision: revisionViewSchema });
@@ -20,13 +20,6 @@ export function useDecideRevision(revisionId: string) {
       apiClient.post(`/api/v1/revisions/${encodeURIComponent(revisionId)}/decision`, decisionResponseSchema, {
         body: DecisionBody.parse(input),
       }),
-    onSuccess: async () => {
-      // The queue, the revision and its entry all change with a decision.
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: reviewQueueKey }),
-        queryClient.invalidateQueries({ queryKey: ['revisions'] }),
-        queryClient.invalidateQueries({ queryKey: ['entries'] }),
-      ]);
-    },
+    onSuccess: () => invalidateReviewData(queryClient),
   });
 }

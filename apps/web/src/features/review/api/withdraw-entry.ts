@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { WithdrawBody } from '@ionfolio/contracts';
 import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
-import { reviewQueueKey } from './get-review-queue';
+import { invalidateReviewData } from './invalidate-review-data';
 
 const withdrawResponseSchema = z.object({ entry: z.object({ accession: z.string() }).loose() });
 
@@ -14,12 +14,6 @@ export function useWithdrawEntry(accession: string) {
       apiClient.post(`/api/v1/entries/${encodeURIComponent(accession)}/withdraw`, withdrawResponseSchema, {
         body: WithdrawBody.parse({ reason }),
       }),
-    onSuccess: async () => {
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: reviewQueueKey }),
-        queryClient.invalidateQueries({ queryKey: ['revisions'] }),
-        queryClient.invalidateQueries({ queryKey: ['entries'] }),
-      ]);
-    },
+    onSuccess: () => invalidateReviewData(queryClient),
   });
 }
