@@ -15,6 +15,14 @@ export default defineConfig({
       },
       {
         test: {
+          name: 'contracts',
+          root: './packages/contracts',
+          include: ['src/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        test: {
           name: 'api',
           root: './apps/api',
           include: ['src/**/*.test.ts'],

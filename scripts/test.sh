@@ -23,7 +23,7 @@ echo "ionfolio: lint"
 node_modules/.bin/eslint . --max-warnings=0
 echo "ionfolio: type-check"
 node_modules/.bin/tsc -p tsconfig.json
-for p in packages/chem apps/fakes apps/api apps/web tests; do node_modules/.bin/tsc -p "$p"; done
+for p in packages/chem packages/contracts apps/fakes apps/api apps/web tests; do node_modules/.bin/tsc -p "$p"; done
 echo "ionfolio: web build"
 node_modules/.bin/vite build --logLevel warn
 echo "ionfolio: tests"
