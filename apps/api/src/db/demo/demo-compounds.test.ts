@@ -1,4 +1,4 @@
-import OCL from 'openchemlib';
+import { Molecule } from 'openchemlib';
 import { formatFormula, nominalMass, parseFormula } from '@ionfolio/chem';
 import { describe, expect, it } from 'vitest';
 import { DEMO_COMPOUNDS, simulatedRetentionIndex } from './demo-compounds';
@@ -16,7 +16,7 @@ describe('DEMO_COMPOUNDS', () => {
 
   it('gives, for every compound, a SMILES whose formula (openchemlib) is the stated formula', () => {
     const mismatches = DEMO_COMPOUNDS.filter((c) => {
-      const fromStructure = OCL.Molecule.fromSmiles(c.smiles).getMolecularFormula().formula;
+      const fromStructure = Molecule.fromSmiles(c.smiles).getMolecularFormula().formula;
       return formatFormula(parseFormula(fromStructure)) !== c.formula;
     }).map((c) => c.key);
     expect(mismatches).toEqual([]);

@@ -198,6 +198,11 @@ function seriesFragments(counts: ElementCounts, t: Traits, massDa: number): { at
   return out;
 }
 
+/** Air, water and CO2 ions (SCIENCE.md §6, common practice) that background subtraction removes. */
+const AIR_WATER_MZ: readonly number[] = [18, 28, 32, 40, 44];
+/** Siloxane column-bleed ions (SCIENCE.md §6), removed too unless the compound itself holds Si. */
+const BLEED_MZ: readonly number[] = [207, 281];
+
 const round2 = (value: number): number => Math.round(value * 100) / 100;
 
 /**
@@ -221,6 +226,12 @@ const round2 = (value: number): number => Math.round(value * 100) / 100;
  * - The pattern (which rules fire, and each intensity) is drawn from a generator seeded by the formula,
  *   the SMILES and `variant`, so a compound keeps its pattern; `rng` adds the measurement noise: each
  *   cluster ×(1 ± 8 %), each peak ×(1 ± 1.5 %).
+ * - Strongest fragments first; a fragment whose cluster would reach above M, or that starts 2 m/z from
+ *   a kept cluster (two unrelated clusters 2 apart read as a Cl/Br pattern), is left out, and no two
+ *   clusters share the top (a second 100 % peak reads as a clipped base peak).
+ * - Background-subtracted, as a lab exports library spectra: m/z 18, 28, 32, 40, 44 (air, water, CO2)
+ *   and, without Si in the formula, 207 and 281 (column bleed) are removed unless they belong to the
+ *   molecular-ion cluster.
  * - Nothing is kept above the highest m/z of the molecular-ion cluster; peaks below 0.05 (base peak
  *   100) and below `fromMz` are dropped; intensities are rounded to 0.01.
  *
@@ -246,9 +257,9 @@ export function simulateSpectrum(
   const variantFactor = variant === 0 ? () => 1 : ((r) => () => 0.7 + 0.7 * r())(demoRandom(demoTextHash(`${compound.formula}|${compound.smiles ?? ''}|${variant}`)));
   const draw = ([min, max]: readonly [number, number]): number => min + (max - min) * pattern();
 
-  const clusters: { atoms: ElementCounts; top: number }[] = [];
+  const candidates: { atoms: ElementCounts; top: number }[] = [];
   const [mMin, mMax] = molecularIonRange(traits, counts);
-  clusters.push({ atoms: counts, top: draw([mMin, mMax]) });
+  const molecularTop = draw([mMin, mMax]);
   for (const rule of RULES) {
     // Draw for every rule, so one rule's outcome never shifts another's values.
     const weight = draw(rule.weight) * variantFactor();
@@ -258,26 +269,55 @@ export function simulateSpectrum(
     const mz = nominalMass(atoms);
     if (Object.keys(atoms).length === 0 || mz < 15 || mz > massDa - 1) continue;
     if (rule.kind === 'ion' && Object.keys(subtract(counts, atoms)).length === 0) continue;
-    clusters.push({ atoms, top: weight });
+    candidates.push({ atoms, top: weight });
   }
-  for (const series of seriesFragments(counts, traits, massDa)) clusters.push({ atoms: series.atoms, top: draw(series.weight) * variantFactor() });
+  for (const series of seriesFragments(counts, traits, massDa)) candidates.push({ atoms: series.atoms, top: draw(series.weight) * variantFactor() });
+
+  // Strongest fragments first. A fragment is left out when its own cluster would reach above M (it
+  // would spoil the molecular-ion cluster) or when it sits 2 m/z from a kept cluster start (two
+  // unrelated clusters 2 apart read like a Cl or Br pattern).
+  const kept: { atoms: ElementCounts; top: number; mz: number; cluster: ReturnType<typeof isotopeCluster> }[] = [
+    { atoms: counts, top: molecularTop, mz: massDa, cluster: isotopeCluster(counts) },
+  ];
+  for (const candidate of candidates.sort((a, b) => b.top - a.top)) {
+    const mz = nominalMass(candidate.atoms);
+    const cluster = isotopeCluster(candidate.atoms);
+    if (cluster.some((p) => p.mz > massDa && p.relIntensity >= 1)) continue;
+    if (kept.some((k) => Math.abs(k.mz - mz) === 2)) continue;
+    kept.push({ ...candidate, mz, cluster });
+  }
+
+  const tops = kept.map(({ top }) => top * (1 + 0.08 * (2 * rng() - 1)));
+  // No two clusters of (nearly) equal top: a second 100 % peak reads as a clipped base peak.
+  const order = tops.map((_, i) => i).sort((a, b) => (tops[b] as number) - (tops[a] as number));
+  const [first, second] = [order[0] as number, order[1]];
+  if (second !== undefined && (tops[second] as number) > 0.95 * (tops[first] as number)) tops[second] = 0.9 * (tops[first] as number);
 
   const sum = new Map<number, number>();
   let molecularTopMz = massDa;
-  clusters.forEach(({ atoms, top }, index) => {
-    const clusterNoise = 1 + 0.08 * (2 * rng() - 1);
-    for (const { mz, relIntensity } of isotopeCluster(atoms)) {
-      const value = (top * clusterNoise * relIntensity) / 100;
+  kept.forEach(({ cluster }, index) => {
+    for (const { mz, relIntensity } of cluster) {
+      const value = ((tops[index] as number) * relIntensity) / 100;
       if (index === 0 && value >= 0.02) molecularTopMz = Math.max(molecularTopMz, mz);
       sum.set(mz, (sum.get(mz) ?? 0) + value);
     }
   });
+  const molecularMzs = new Set(kept[0]?.cluster.map((p) => p.mz));
+  const subtracted = (mz: number): boolean =>
+    !molecularMzs.has(mz) && (AIR_WATER_MZ.includes(mz) || (BLEED_MZ.includes(mz) && !counts.Si));
 
   const noisy = [...sum.entries()]
-    .filter(([mz]) => mz >= fromMz && mz <= molecularTopMz)
+    .filter(([mz]) => mz >= fromMz && mz <= molecularTopMz && !subtracted(mz))
     .map(([mz, value]): [number, number] => [mz, value * (1 + 0.015 * (2 * rng() - 1))])
     .sort((a, b) => a[0] - b[0]);
   const base = Math.max(...noisy.map(([, value]) => value));
+  const baseMz = noisy.find(([, value]) => value === base)?.[0];
+  // Overlapping clusters can still tie with the base peak: keep every other peak clearly below it.
+  for (const peak of noisy) {
+    if (peak[0] === baseMz) continue;
+    const ceiling = Math.abs(peak[0] - (baseMz ?? 0)) === 1 ? 0.93 : 0.97;
+    if (peak[1] > ceiling * base) peak[1] = ceiling * base;
+  }
   return noisy
     .map(([mz, value]): [number, number] => [mz, round2((value / base) * 100)])
     .filter(([, value]) => value >= 0.05);
