@@ -17,7 +17,9 @@ PG_PORT="${IONFOLIO_TEST_PG_PORT:-54330}"
 PG_FSYNC=off pg_ensure_running "$PG_DIR" "$PG_PORT"
 trap 'pg_stop "$PG_DIR"' EXIT
 pg_ensure_database "$PG_PORT" ionfolio_test fresh
-export TEST_DATABASE_URL="postgres://ionfolio@127.0.0.1:$PG_PORT/ionfolio_test"
+pg_ensure_database "$PG_PORT" ionfolio_e2e fresh
+TEST_DB="postgres://ionfolio@127.0.0.1:$PG_PORT/ionfolio_test"
+E2E_DB="postgres://ionfolio@127.0.0.1:$PG_PORT/ionfolio_e2e"
 
 echo "ionfolio: lint"
 node_modules/.bin/eslint . --max-warnings=0
@@ -26,5 +28,9 @@ node_modules/.bin/tsc -p tsconfig.json
 for p in packages/chem packages/contracts apps/fakes apps/api apps/web tests; do node_modules/.bin/tsc -p "$p"; done
 echo "ionfolio: web build"
 node_modules/.bin/vite build --logLevel warn
-echo "ionfolio: tests"
-node_modules/.bin/vitest run "$@"
+echo "ionfolio: unit and API tests"
+TEST_DATABASE_URL="$TEST_DB" node_modules/.bin/vitest run --project chem --project contracts --project api --project web "$@"
+# The browser journeys get a database of their own with the demo library loaded, so the API
+# tests' changes to roles and rows can never race them.
+echo "ionfolio: browser journeys"
+TEST_DATABASE_URL="$E2E_DB" node_modules/.bin/vitest run --project e2e "$@"

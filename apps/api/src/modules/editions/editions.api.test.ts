@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readJcamp } from '@ionfolio/chem';
+import type { Response } from 'superagent';
 import { createTestContext, signInAs, type TestContext } from '../../testing/test-app';
 import { chlorobenzeneContent } from '../../testing/fixtures';
 import { publishEntry } from '../../testing/curation';
@@ -14,11 +15,12 @@ afterAll(async () => {
 
 const W = { 'X-Requested-With': 'ionfolio' };
 // JCAMP-DX is served as chemical/x-jcamp-dx, which supertest does not buffer as text by itself.
-const asText = (res: NodeJS.ReadableStream, done: (err: Error | null, body: string) => void) => {
+const asText = (res: Response, done: (err: Error | null, body: string) => void) => {
+  const stream = res as unknown as NodeJS.ReadableStream;
   let text = '';
-  res.setEncoding('utf8');
-  res.on('data', (chunk: string) => (text += chunk));
-  res.on('end', () => done(null, text));
+  stream.setEncoding('utf8');
+  stream.on('data', (chunk: string) => (text += chunk));
+  stream.on('end', () => done(null, text));
 };
 const label = () => `t${Date.now().toString(36)}${Math.floor(Math.random() * 1000)}`;
 
