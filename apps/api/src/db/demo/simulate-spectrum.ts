@@ -269,6 +269,7 @@ export function simulateSpectrum(
     const mz = nominalMass(atoms);
     if (Object.keys(atoms).length === 0 || mz < 15 || mz > massDa - 1) continue;
     if (rule.kind === 'ion' && Object.keys(subtract(counts, atoms)).length === 0) continue;
+    if ((counts.C ?? 0) > 0 && !atoms.C) continue; // OH+, SH+ … are minor ions; leave them out
     candidates.push({ atoms, top: weight });
   }
   for (const series of seriesFragments(counts, traits, massDa)) candidates.push({ atoms: series.atoms, top: draw(series.weight) * variantFactor() });
