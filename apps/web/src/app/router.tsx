@@ -44,7 +44,10 @@ export const routes: RouteObject[] = [
           page(paths.editions.path, () => import('./routes/editions/editions')),
           page(paths.edition.path, () => import('./routes/editions/edition')),
           page(paths.overview.path, () => import('./routes/overview/overview')),
-          onlyFor(paths.submit.minRole, [page(paths.submit.path, () => import('./routes/submit/submit'))]),
+          onlyFor(paths.submit.minRole, [
+            page(paths.submit.path, () => import('./routes/submit/submit')),
+            page(paths.submitRevision.path, () => import('./routes/submit/submit-revision')),
+          ]),
           onlyFor(paths.review.minRole, [
             page(paths.review.path, () => import('./routes/review/review-desk')),
             page(paths.reviewImport.path, () => import('./routes/review/bulk-import')),

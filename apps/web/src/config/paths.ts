@@ -13,6 +13,7 @@ export const paths = {
   library: { path: '/library', label: 'Library', minRole: 'reader' },
   entry: { path: '/entries/:accession', label: 'Entry', minRole: 'reader' },
   submit: { path: '/submit', label: 'Submit', minRole: 'contributor' },
+  submitRevision: { path: '/submit/:revisionId', label: 'Edit revision', minRole: 'contributor' },
   review: { path: '/review', label: 'Review desk', minRole: 'curator' },
   reviewImport: { path: '/review/import', label: 'Bulk import', minRole: 'curator' },
   reviewRevision: { path: '/review/:revisionId', label: 'Revision under review', minRole: 'curator' },
@@ -53,6 +54,11 @@ export function entryHref(accession: string): string {
 /** One past or current revision of an entry, e.g. `/entries/IF-000123?revision=2`. */
 export function entryRevisionHref(accession: string, revision: number): string {
   return `${entryHref(accession)}?revision=${revision}`;
+}
+
+/** The submit form for one of one's own open revisions. */
+export function submitRevisionHref(revisionId: string): string {
+  return `/submit/${encodeURIComponent(revisionId)}`;
 }
 
 /** A revision on the review desk. */
