@@ -1,7 +1,7 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { meReply } from '../../../testing/factories';
-import { installFakeFetch, json, type RecordedRequest } from '../../../testing/fake-fetch';
+import { apiError, installFakeFetch, json, type RecordedRequest } from '../../../testing/fake-fetch';
 import { renderApp } from '../../../testing/render-app';
 
 const firstPage = {
@@ -89,6 +89,19 @@ describe('audit log', () => {
     expect(more?.get('action')).toBe('revision.published');
     expect(within(screen.getByRole('table', { name: 'Audit events' })).getAllByRole('row')).toHaveLength(4);
     expect(screen.queryByRole('button', { name: 'Load more' })).toBeNull();
+  });
+
+  it('when Load more fails, keeps the events shown and says the older ones could not be loaded', async () => {
+    installFakeFetch({
+      'GET /api/v1/me': meReply('curator'),
+      'GET /api/v1/audit': (request) =>
+        request.url.searchParams.has('cursor') ? apiError(400, 'BAD_CURSOR', 'The cursor is not valid.') : json(firstPage),
+    });
+    renderApp('/admin/audit');
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Load more' }));
+    expect((await screen.findByRole('alert')).textContent).toBe('Older events could not be loaded: The cursor is not valid.');
+    expect(within(screen.getByRole('table', { name: 'Audit events' })).getAllByRole('row')).toHaveLength(3);
   });
 
   it('when a reader opens it, is refused and nothing is fetched', async () => {

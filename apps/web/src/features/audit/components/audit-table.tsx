@@ -14,10 +14,13 @@ const bodyCell = 'px-3 py-1.5 align-top';
 export function AuditTable({ filter }: { filter: AuditFilter }) {
   const audit = useAuditEvents(filter);
   if (audit.isPending) return <LoadingState label="Loading the audit log…" />;
-  if (audit.isError) {
+  // A failed "Load more" keeps the pages already shown; only a failed first page replaces the table.
+  const data = audit.data;
+  if (audit.isError && (!audit.isFetchNextPageError || data === undefined)) {
     return <ErrorNotice title="The audit log could not be loaded" error={audit.error} onRetry={() => void audit.refetch()} />;
   }
-  const events = audit.data.pages.flatMap((page) => page.events);
+  if (data === undefined) return null;
+  const events = data.pages.flatMap((page) => page.events);
   if (events.length === 0) {
     return (
       <EmptyState title={filter.action || filter.subject ? 'No event matches these filters' : 'Nothing has been recorded yet'}>
