@@ -29,8 +29,22 @@ for p in packages/chem packages/contracts apps/fakes apps/api apps/web tests; do
 echo "ionfolio: web build"
 node_modules/.bin/vite build --logLevel warn
 echo "ionfolio: unit and API tests"
-TEST_DATABASE_URL="$TEST_DB" node_modules/.bin/vitest run --project chem --project contracts --project api --project web "$@"
+REPORTS="$ROOT/.data/test-reports"
+mkdir -p "$REPORTS"
+rm -f "$REPORTS"/*.json
+TEST_DATABASE_URL="$TEST_DB" node_modules/.bin/vitest run --project chem --project contracts --project api --project web \
+  --reporter=default --reporter=json --outputFile.json="$REPORTS/unit.json" "$@"
 # The browser journeys get a database of their own with the demo library loaded, so the API
 # tests' changes to roles and rows can never race them.
 echo "ionfolio: browser journeys"
-TEST_DATABASE_URL="$E2E_DB" node_modules/.bin/vitest run --project e2e "$@"
+TEST_DATABASE_URL="$E2E_DB" node_modules/.bin/vitest run --project e2e \
+  --reporter=default --reporter=json --outputFile.json="$REPORTS/e2e.json" "$@"
+# One plain closing line over both runs.
+node -e '
+  let passed = 0, failed = 0, skipped = 0;
+  for (const f of process.argv.slice(1)) {
+    const r = JSON.parse(require("fs").readFileSync(f, "utf8"));
+    passed += r.numPassedTests; failed += r.numFailedTests; skipped += r.numPendingTests + (r.numTodoTests || 0);
+  }
+  console.log(`${passed} passed, ${failed} failed` + (skipped ? `, ${skipped} skipped` : ""));
+' "$REPORTS/unit.json" "$REPORTS/e2e.json"
