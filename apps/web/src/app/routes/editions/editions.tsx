@@ -17,7 +17,7 @@ export default function EditionsPage() {
         title="Editions"
         description="Frozen, named snapshots of the published revisions, so that a search can be repeated exactly later."
       />
-      <div className={canFreeze ? 'grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]' : ''}>
+      <div className={canFreeze ? 'grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]' : ''}>
         <PanelErrorBoundary title="The editions list">
           <EditionsTable />
         </PanelErrorBoundary>

@@ -72,8 +72,13 @@ describe('review desk · one revision', () => {
   });
 
   it('when another curator decided first (409 STALE_REVISION), shows the stale message and reloads the revision', async () => {
+    let loads = 0;
     const network = installFakeFetch(
-      routes({ [`POST ${revisionPath}/decision`]: apiError(409, 'STALE_REVISION', 'The revision changed since you loaded it.') }),
+      routes({
+        [`POST ${revisionPath}/decision`]: apiError(409, 'STALE_REVISION', 'The revision changed since you loaded it.'),
+        // The reload shows what the other curator did.
+        [`GET ${revisionPath}`]: () => json({ revision: (loads += 1) === 1 ? revision : { ...revision, state: 'published', lockVersion: 4 } }),
+      }),
     );
     renderApp(`/review/${revision.id}`);
 
@@ -88,6 +93,8 @@ describe('review desk · one revision', () => {
       lockVersion: 3,
     });
     await waitFor(() => expect(network.made('GET', revisionPath)).toHaveLength(2));
+    expect(await screen.findByText(/Only a revision in review can be published/)).toBeTruthy();
+    expect(screen.getByRole('alert').textContent).toContain('Someone decided or changed it first — reload');
   });
 
   it('when the curator is the author (403 SELF_REVIEW), says another curator must decide', async () => {

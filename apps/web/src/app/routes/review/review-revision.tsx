@@ -79,7 +79,7 @@ export default function ReviewRevisionPage() {
           {current.changeNote}
         </p>
       ) : null}
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-6">
           {side.isPending ? (
             <LoadingState label="Loading the published revision…" />

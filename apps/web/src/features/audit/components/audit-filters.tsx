@@ -23,7 +23,7 @@ export function AuditFilters({ filter, onApply }: { filter: AuditFilter; onApply
         <input
           id={actionId}
           value={action}
-          placeholder="revision.published"
+          placeholder="e.g. revision.published"
           onChange={(event) => setAction(event.target.value)}
           className={inputClasses}
         />
@@ -35,7 +35,7 @@ export function AuditFilters({ filter, onApply }: { filter: AuditFilter; onApply
         <input
           id={subjectId}
           value={subject}
-          placeholder="IF-000042 r2"
+          placeholder="e.g. IF-000042 r2"
           onChange={(event) => setSubject(event.target.value)}
           className={inputClasses}
         />

@@ -36,7 +36,7 @@ export function FreezeEditionForm({ onFrozen }: { onFrozen: (label: string) => v
         <input
           id={labelId}
           value={label}
-          placeholder="2026.12"
+          placeholder="e.g. 2026.12"
           aria-invalid={labelError !== null}
           onChange={(event) => {
             setLabel(event.target.value);

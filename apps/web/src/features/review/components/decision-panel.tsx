@@ -39,15 +39,6 @@ export function DecisionPanel({ revision, onDecided }: DecisionPanelProps) {
   const commentId = useId();
   const hintId = useId();
 
-  if (revision.state !== 'in_review') {
-    return (
-      <p className="text-sm leading-relaxed text-ink-soft">
-        Only a revision in review can be published or returned; this one is{' '}
-        {revision.state === 'needs_changes' ? 'back with its author' : revision.state.replace('_', ' ')}.
-      </p>
-    );
-  }
-
   const send = (decision: DecisionInput['decision']) => {
     if (decision === 'needs_changes' && comment.trim() === '') {
       setCommentMissing(true);
@@ -68,6 +59,26 @@ export function DecisionPanel({ revision, onDecided }: DecisionPanelProps) {
   };
 
   const failure = decide.isError ? refusal(decide.error) : null;
+  const failureNotice = failure ? (
+    <div role="alert" className="rounded-md border border-copper/60 bg-copper-soft px-4 py-3 text-ink">
+      <p className="font-bold">{failure.title}</p>
+      <p className="mt-1 text-sm leading-relaxed">{failure.text}</p>
+    </div>
+  ) : null;
+
+  if (revision.state !== 'in_review') {
+    // After a stale decision the reloaded revision may no longer be in review; the notice stays.
+    return (
+      <div className="space-y-3">
+        {failureNotice}
+        <p className="text-sm leading-relaxed text-ink-soft">
+          Only a revision in review can be published or returned; this one is{' '}
+          {revision.state === 'needs_changes' ? 'back with its author' : revision.state.replace('_', ' ')}.
+        </p>
+      </div>
+    );
+  }
+
   return (
     <div className="space-y-3">
       <div>
@@ -103,12 +114,7 @@ export function DecisionPanel({ revision, onDecided }: DecisionPanelProps) {
           {decide.isPending && decide.variables.decision === 'needs_changes' ? 'Returning…' : 'Return with comment'}
         </Button>
       </div>
-      {failure ? (
-        <div role="alert" className="rounded-md border border-copper/60 bg-copper-soft px-4 py-3 text-ink">
-          <p className="font-bold">{failure.title}</p>
-          <p className="mt-1 text-sm leading-relaxed">{failure.text}</p>
-        </div>
-      ) : null}
+      {failureNotice}
       <p className="text-xs text-ink-soft">
         Deciding on {revision.label} as seen at lock version {revision.lockVersion}.
       </p>
