@@ -1,20 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
+import { revisionCommentSchema } from '../../../components/spectrum/comment-list';
 import { apiClient } from '../../../lib/api-client';
 
-const authorSchema = z.union([z.string(), z.object({ displayName: z.string() }).transform((a) => a.displayName)]).nullable();
-
-/** A comment on a revision (`CommentView`): the author's name only, which is all this page shows. */
-export const revisionCommentSchema = z.object({
-  id: z.string(),
-  parentId: z.string().nullable(),
-  author: authorSchema,
-  body: z.string(),
-  kind: z.enum(['comment', 'decision']),
-  createdAt: z.string(),
-});
-
-export type RevisionComment = z.infer<typeof revisionCommentSchema>;
 
 function commentsKey(revisionId: string) {
   return ['revisions', revisionId, 'comments', 'submit'] as const;

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/errors/error-notice';
+import { CommentList } from '../../../components/spectrum/comment-list';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { formatDateTime } from '../../../lib/format-date-time';
 import { describeError } from '../../../lib/describe-error';
 import { usePostComment, useRevisionComments } from '../api/revision-comments';
 import { inputClass } from './form-field';
@@ -21,17 +21,9 @@ export function ReviewThread({ revisionId, canReply }: { revisionId: string; can
       {comments.data.length === 0 ? (
         <p className="mt-1 text-ink-soft">No comments on this revision yet.</p>
       ) : (
-        <ol className="mt-2 grid gap-3">
-          {comments.data.map((c) => (
-            <li key={c.id} className={`border-l-2 pl-3 ${c.kind === 'decision' ? 'border-copper' : 'border-rule-faint'} ${c.parentId ? 'ml-6' : ''}`}>
-              <p className="text-sm text-ink-soft">
-                <span className="font-bold text-ink">{c.author ?? 'someone no longer listed'}</span>
-                {c.kind === 'decision' ? ' · review decision' : ''} · <time dateTime={c.createdAt}>{formatDateTime(c.createdAt)}</time>
-              </p>
-              <p className="whitespace-pre-wrap leading-relaxed">{c.body}</p>
-            </li>
-          ))}
-        </ol>
+        <div className="mt-2">
+          <CommentList comments={comments.data} />
+        </div>
       )}
       {canReply ? (
         <form

@@ -1,0 +1,213 @@
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { meReply } from '../../../testing/factories';
+import { apiError, installFakeFetch, json, type RecordedRequest } from '../../../testing/fake-fetch';
+import { renderApp } from '../../../testing/render-app';
+
+const author = { id: 'u-contrib', login: 'treyes', displayName: 'Tomas Reyes' };
+const curator = { id: 'u-cur', login: 'dokafor', displayName: 'Dana Okafor' };
+
+// An invented, simulated entry: 1-chloro-4-methoxybenzene, C7H7ClO (nominal 142; M+2 about 32 % of M
+// for one Cl, SCIENCE.md §1, computed). Peaks are made up for the page, not measured.
+function revision(number: number, state: string, overrides: Record<string, unknown> = {}) {
+  return {
+    id: `00000000-0000-4000-8000-00000000000${number}`,
+    accession: 'IF-000012',
+    number,
+    label: `IF-000012 r${number}`,
+    state,
+    lockVersion: 2,
+    name: '4-Chloroanisole',
+    synonyms: ['1-chloro-4-methoxybenzene'],
+    formula: 'C7H7ClO',
+    nominalMass: 142,
+    monoisotopicMass: 142.0185,
+    structure: 'COc1ccc(Cl)cc1',
+    structureFormat: 'smiles',
+    casRn: null,
+    peaks: [
+      [99, 38],
+      [127, 55],
+      [142, 100],
+      [143, 8],
+      [144, 32],
+    ],
+    peakCount: 5,
+    basePeakMz: 142,
+    conditions: { ionizationEnergyEv: 70, inlet: 'GC', sourceTemperatureC: 230 },
+    retentionIndex: { value: 1142, column: 'non-polar' },
+    sampleNotes: 'Standard lot AR-7731 (invented), GC area 99.2 %.',
+    changeNote: number === 1 ? 'First recording.' : `Re-run ${number}.`,
+    simulated: true,
+    checks: [
+      { id: 'isotope-cluster', title: 'Isotope cluster', status: 'pass', reason: 'Cluster agrees with C7H7ClO.', numbers: { m2Observed: 32 } },
+    ],
+    checksWorst: 'pass',
+    contentSha256: 'abc',
+    restoredFrom: null,
+    author,
+    reviewer: curator,
+    createdAt: `2026-0${number}-01T08:00:00.000Z`,
+    updatedAt: `2026-0${number}-01T08:00:00.000Z`,
+    submittedAt: `2026-0${number}-02T08:00:00.000Z`,
+    decidedAt: `2026-0${number}-03T08:00:00.000Z`,
+    publishedAt: `2026-0${number}-03T08:00:00.000Z`,
+    ...overrides,
+  };
+}
+
+function summary(r: ReturnType<typeof revision>) {
+  const { id, number, label, state, name, formula, changeNote, createdAt, submittedAt, publishedAt, checksWorst, contentSha256 } = r;
+  return { id, number, label, state, name, formula, changeNote, author, reviewer: curator, createdAt, submittedAt, publishedAt, checksWorst, contentSha256 };
+}
+
+const r1 = revision(1, 'superseded');
+const r2 = revision(2, 'superseded');
+const r3 = revision(3, 'published');
+
+function entryReply(request: RecordedRequest, extra: Record<string, unknown> = {}) {
+  const asked = request.url.searchParams.get('revision');
+  const shown = [r1, r2, r3].find((r) => String(r.number) === asked) ?? r3;
+  return json({
+    entry: {
+      accession: 'IF-000012',
+      createdAt: r1.createdAt,
+      withdrawnAt: null,
+      withdrawnReason: null,
+      revision: shown,
+      revisions: [r1, r2, r3].map(summary),
+      ...extra,
+    },
+  });
+}
+
+function routes(role: 'reader' | 'contributor' | 'curator', more = {}) {
+  const person = role === 'curator' ? curator : role === 'contributor' ? author : { id: 'u-read', login: 'lnakamura', displayName: 'Lena Nakamura' };
+  return {
+    'GET /api/v1/me': meReply(role, person),
+    'GET /api/v1/entries/IF-000012': (request: RecordedRequest) => entryReply(request),
+    'GET /api/v1/revisions/00000000-0000-4000-8000-000000000003/comments': json({ comments: [] }),
+    'GET /api/v1/revisions/00000000-0000-4000-8000-000000000001/comments': json({
+      comments: [{ id: 'c1', parentId: null, author: curator, body: 'Published as recorded.', kind: 'decision', createdAt: '2026-01-03T08:00:00.000Z' }],
+    }),
+    'POST /api/v1/structures/preview': json({ svg: '<svg xmlns="http://www.w3.org/2000/svg"/>', formula: 'C7H7ClO', nominalMass: 142 }),
+    ...more,
+  };
+}
+
+describe('entry page', () => {
+  it('when a reader opens an entry, shows the simulated marker, the timeline with the current revision marked, and no actions', async () => {
+    const network = installFakeFetch(routes('reader'));
+    renderApp('/entries/IF-000012');
+
+    expect(await screen.findByRole('heading', { level: 1, name: '4-Chloroanisole' })).toBeTruthy();
+    expect(screen.getByTestId('simulated-marker').textContent).toBe('simulated — demo only');
+    const timeline = screen.getByRole('list', { name: 'Revision timeline' });
+    const items = within(timeline).getAllByRole('listitem');
+    expect(items.map((li) => within(li).getByRole('link').textContent)).toEqual(['IF-000012 r3', 'IF-000012 r2', 'IF-000012 r1']);
+    expect(items[0]?.getAttribute('aria-current')).toBe('true');
+    expect(items[1]?.getAttribute('aria-current')).toBeNull();
+    expect(within(items[2]!).getByRole('link').getAttribute('href')).toBe('/entries/IF-000012?revision=1');
+    expect(within(items[2]!).getByText('First recording.')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Export JCAMP-DX' }).getAttribute('href')).toBe('/api/v1/entries/IF-000012/jcamp?revision=3');
+    expect(screen.getByText('1142 (non-polar column)')).toBeTruthy();
+    expect(screen.getByRole('list', { name: 'Consistency checks' }).textContent).toContain('Cluster agrees with C7H7ClO.');
+    expect(screen.getByRole('table', { name: 'Peaks of IF-000012 r3' })).toBeTruthy();
+
+    expect(screen.queryByRole('button', { name: 'Start a new revision' })).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Withdraw entry' })).toBeNull();
+    expect(screen.queryByRole('button', { name: "Restore this revision's content" })).toBeNull();
+    // Readers get the SMILES as text: the drawing endpoint is for contributors.
+    expect(screen.getByText('SMILES COc1ccc(Cl)cc1')).toBeTruthy();
+    expect(network.made('POST', '/api/v1/structures/preview')).toHaveLength(0);
+  });
+
+  it('when ?revision=1 is asked for, loads that revision and marks it in the timeline with its comments', async () => {
+    const network = installFakeFetch(routes('reader'));
+    renderApp('/entries/IF-000012?revision=1');
+
+    expect(await screen.findByText('IF-000012 r1', { selector: 'span' })).toBeTruthy();
+    expect(network.made('GET', '/api/v1/entries/IF-000012')[0]?.url.searchParams.get('revision')).toBe('1');
+    const items = within(screen.getByRole('list', { name: 'Revision timeline' })).getAllByRole('listitem');
+    expect(items[2]?.getAttribute('aria-current')).toBe('true');
+    expect(items[0]?.getAttribute('aria-current')).toBeNull();
+    expect(await screen.findByText('Published as recorded.')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Export JCAMP-DX' }).getAttribute('href')).toBe('/api/v1/entries/IF-000012/jcamp?revision=1');
+  });
+
+  it('when a curator restores an old revision, asks for a draft from it and opens that draft', async () => {
+    const draftId = '11111111-2222-4333-8444-555555555555';
+    const network = installFakeFetch(
+      routes('curator', {
+        'POST /api/v1/entries/IF-000012/revisions': json({ revision: { ...revision(4, 'draft'), id: draftId } }, 201),
+        [`GET /api/v1/revisions/${draftId}`]: json({ revision: { ...revision(4, 'draft'), id: draftId } }),
+        [`GET /api/v1/revisions/${draftId}/comments`]: json({ comments: [] }),
+        'GET /api/v1/my/revisions': json({ items: [] }),
+      }),
+    );
+    const { router } = renderApp('/entries/IF-000012?revision=1');
+
+    fireEvent.click(await screen.findByRole('button', { name: "Restore this revision's content" }));
+
+    await waitFor(() => expect(router.state.location.pathname).toBe(`/submit/${draftId}`));
+    expect(network.made('POST', '/api/v1/entries/IF-000012/revisions')[0]?.body).toEqual({
+      fromRevision: 1,
+      changeNote: 'Restores the content of IF-000012 r1.',
+    });
+  });
+
+  it('when a curator withdraws the entry, wants a reason, sends it and shows the withdrawn entry', async () => {
+    let withdrawn = false;
+    const network = installFakeFetch(
+      routes('curator', {
+        'GET /api/v1/entries/IF-000012': (request: RecordedRequest) =>
+          entryReply(request, withdrawn ? { withdrawnAt: '2026-04-01T09:00:00.000Z', withdrawnReason: 'Standard found to be a mixture.' } : {}),
+        'POST /api/v1/entries/IF-000012/withdraw': () => {
+          withdrawn = true;
+          return json({ entry: { accession: 'IF-000012' } });
+        },
+      }),
+    );
+    renderApp('/entries/IF-000012');
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Withdraw entry' }));
+    const dialog = screen.getByRole('dialog', { name: 'Withdraw entry' });
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Withdraw' }));
+    expect(within(dialog).getByRole('alert').textContent).toBe('give a reason');
+    expect(network.made('POST', '/api/v1/entries/IF-000012/withdraw')).toHaveLength(0);
+
+    fireEvent.change(within(dialog).getByLabelText('Reason'), { target: { value: 'Standard found to be a mixture.' } });
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Withdraw' }));
+
+    const note = await screen.findByRole('note', { name: 'Withdrawn' });
+    expect(note.textContent).toContain('Reason: Standard found to be a mixture.');
+    expect(network.made('POST', '/api/v1/entries/IF-000012/withdraw')[0]?.body).toEqual({ reason: 'Standard found to be a mixture.' });
+    expect(screen.queryByRole('button', { name: 'Withdraw entry' })).toBeNull();
+  });
+
+  it('when a contributor starts a new revision and one is already open, shows the server message', async () => {
+    installFakeFetch(
+      routes('contributor', {
+        'POST /api/v1/entries/IF-000012/revisions': apiError(409, 'OPEN_REVISION_EXISTS', 'IF-000012 r4 is already open; finish it first.'),
+      }),
+    );
+    renderApp('/entries/IF-000012');
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Start a new revision' }));
+
+    expect((await screen.findByRole('alert')).textContent).toBe('IF-000012 r4 is already open; finish it first.');
+    expect(screen.queryByRole('button', { name: 'Withdraw entry' })).toBeNull();
+    // Contributors may draw structures: the drawing is an image from a data URL.
+    const img = await screen.findByRole('img', { name: 'Structure drawing, C7H7ClO' });
+    expect(img.getAttribute('src')?.startsWith('data:image/svg+xml;charset=utf-8,')).toBe(true);
+  });
+
+  it('when the entry does not exist, says there is no such page', async () => {
+    installFakeFetch({
+      'GET /api/v1/me': meReply('reader'),
+      'GET /api/v1/entries/IF-000999': apiError(404, 'NOT_FOUND', 'No entry IF-000999'),
+    });
+    renderApp('/entries/IF-000999');
+    expect(await screen.findByText('There is no page at this address')).toBeTruthy();
+  });
+});
