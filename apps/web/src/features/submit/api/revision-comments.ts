@@ -3,7 +3,6 @@ import { z } from 'zod';
 import { revisionCommentSchema } from '../../../components/spectrum/comment-list';
 import { apiClient } from '../../../lib/api-client';
 
-
 function commentsKey(revisionId: string) {
   return ['revisions', revisionId, 'comments', 'submit'] as const;
 }
