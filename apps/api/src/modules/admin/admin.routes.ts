@@ -67,7 +67,7 @@ export function adminRoutes(ds: DataSource): Router {
   r.get('/my/revisions', requireRole('contributor'), async (req, res) => {
     const items = await ds.query(
       `SELECT r.id AS "revisionId", e.accession, r.number, e.accession || ' r' || r.number AS label, r.state, r.name, r.formula,
-              r.checks_worst AS "checksWorst", u.display_name AS author, r.submitted_at AS "submittedAt", r.updated_at AS "updatedAt",
+              r.checks_worst AS "checksWorst", u.display_name AS author, u.login AS "authorLogin", r.submitted_at AS "submittedAt", r.updated_at AS "updatedAt",
               EXISTS (SELECT 1 FROM revisions p WHERE p.entry_id = r.entry_id AND p.state = 'published') AS "hasPublished", r.simulated
          FROM revisions r JOIN entries e ON e.id = r.entry_id JOIN users u ON u.id = r.author_id
         WHERE r.author_id = $1 AND r.state IN ('draft', 'in_review', 'needs_changes')

@@ -165,6 +165,7 @@ export interface QueueItem {
   formula: string;
   checksWorst: string;
   author: string;
+  authorLogin: string;
   submittedAt: string | null;
   updatedAt: string;
   hasPublished: boolean;
@@ -185,7 +186,7 @@ export async function reviewQueue(ds: DataSource, query: { state: string; author
   }
   const items: QueueItem[] = await ds.query(
     `SELECT r.id AS "revisionId", e.accession, r.number, e.accession || ' r' || r.number AS label, r.state, r.name, r.formula,
-            r.checks_worst AS "checksWorst", u.display_name AS author, r.submitted_at AS "submittedAt", r.updated_at AS "updatedAt",
+            r.checks_worst AS "checksWorst", u.display_name AS author, u.login AS "authorLogin", r.submitted_at AS "submittedAt", r.updated_at AS "updatedAt",
             EXISTS (SELECT 1 FROM revisions p WHERE p.entry_id = r.entry_id AND p.state = 'published') AS "hasPublished",
             r.simulated
        FROM revisions r JOIN entries e ON e.id = r.entry_id JOIN users u ON u.id = r.author_id
