@@ -25,7 +25,7 @@ export function structurePreview(structure: string, format: 'smiles' | 'molfile'
 
 export function structuresRoutes(): Router {
   const r = Router();
-  r.post('/structures/preview', requireRole('contributor'), (req, res) => {
+  r.post('/structures/preview', requireRole('reader'), (req, res) => {
     const { structure, format } = PreviewBody.parse(req.body);
     res.json(structurePreview(structure, format));
   });
