@@ -19,7 +19,8 @@ function content(plan: DemoEntryPlan, rev: DemoRevisionPlan): RevisionContent {
     peaks: rev.peaks,
     conditions: rev.conditions,
     retentionIndex: c.retentionIndex ? { value: c.retentionIndex.value, column: c.retentionIndex.columnClass } : null,
-    sampleNotes: `${DEMO_MARK[0]!.toUpperCase()}${DEMO_MARK.slice(1)}. ${rev.sampleNotes}`,
+    // The demo plans' sample notes already carry the mark; keep it there even if a plan forgets.
+    sampleNotes: rev.sampleNotes.includes(DEMO_MARK) ? rev.sampleNotes : `${rev.sampleNotes} (${DEMO_MARK})`,
     changeNote: rev.changeNote,
   };
 }
