@@ -17,6 +17,9 @@ import { authRoutes } from './modules/auth/auth.routes';
 import { configurePassport } from './modules/auth/auth.service';
 import { usersRoutes } from './modules/users/users.routes';
 import { entriesRoutes } from './modules/entries/entries.routes';
+import { entriesCsvRoutes } from './modules/entries/entries-csv.routes';
+import { structureSearchRoutes } from './modules/structure-search/structure-search.routes';
+import { overviewRoutes } from './modules/overview/overview.routes';
 import { reviewsRoutes } from './modules/reviews/reviews.routes';
 import { editionsRoutes } from './modules/editions/editions.routes';
 import { uploadsRoutes } from './modules/uploads/uploads.routes';
@@ -99,6 +102,9 @@ export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Ex
     csrfGuard,
     usersRoutes(dataSource),
     entriesRoutes(dataSource),
+    entriesCsvRoutes(dataSource),
+    structureSearchRoutes(dataSource),
+    overviewRoutes(dataSource),
     reviewsRoutes(dataSource),
     editionsRoutes(dataSource),
     uploadsRoutes(),

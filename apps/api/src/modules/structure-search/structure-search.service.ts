@@ -1,0 +1,130 @@
+import type { DataSource } from 'typeorm';
+import type { Molecule } from 'openchemlib';
+import { AppError } from '../../shared/app-error';
+import type { StructureSearchRequest } from './structure-search.schemas';
+import { containsFragment, fragmentOf, readStructure, structureKeys } from './structure-keys';
+
+export interface StructureHit {
+  accession: string;
+  revision: number;
+  name: string;
+  formula: string;
+  nominalMass: number;
+  structure: string;
+  simulated: boolean;
+}
+
+const BATCH = 500;
+
+/**
+ * Computes the keys of published revisions that have a structure but no keys yet (or keys of
+ * other content). Publishing does not call this (the review service is not ours to change), so
+ * each search brings the table up to date first: after the first search it is a quick
+ * anti-join that finds nothing. A structure openchemlib cannot read is stored with its error and
+ * never matches.
+ */
+export async function refreshStructureKeys(ds: DataSource): Promise<number> {
+  let done = 0;
+  for (;;) {
+    const rows: { id: string; structure: string; format: 'smiles' | 'molfile'; sha: string }[] = await ds.query(
+      `SELECT r.id, r.structure, r.structure_format AS format, r.content_sha256 AS sha
+         FROM revisions r LEFT JOIN structure_keys sk ON sk.revision_id = r.id
+        WHERE r.state = 'published' AND r.structure IS NOT NULL AND r.structure_format IS NOT NULL
+          AND (sk.revision_id IS NULL OR sk.content_sha256 <> r.content_sha256)
+        LIMIT ${BATCH}`,
+    );
+    if (rows.length === 0) return done;
+    const values: unknown[] = [];
+    const tuples = rows.map((row, i) => {
+      let idcode: string | null = null;
+      let bits: string | null = null;
+      let error: string | null = null;
+      try {
+        const keys = structureKeys(readStructure(row.structure, row.format));
+        idcode = keys.idcode;
+        bits = keys.indexBits;
+      } catch (err) {
+        error = String((err as Error).message ?? err).slice(0, 500);
+      }
+      values.push(row.id, row.sha, idcode, bits, error);
+      const b = i * 5;
+      return `($${b + 1}::uuid, $${b + 2}, $${b + 3}, $${b + 4}::bit(512), $${b + 5})`;
+    });
+    await ds.query(
+      `INSERT INTO structure_keys (revision_id, content_sha256, idcode, ss_index, error) VALUES ${tuples.join(', ')}
+       ON CONFLICT (revision_id) DO UPDATE SET content_sha256 = EXCLUDED.content_sha256, idcode = EXCLUDED.idcode,
+         ss_index = EXCLUDED.ss_index, error = EXCLUDED.error, computed_at = now()`,
+      values,
+    );
+    done += rows.length;
+  }
+}
+
+type CandidateRow = Omit<StructureHit, never> & { idcode: string; bits: string };
+
+const HIT_COLUMNS = `e.accession, r.number AS revision, r.name, r.formula, r.nominal_mass AS "nominalMass", r.structure, r.simulated,
+  sk.idcode, sk.ss_index::text AS bits`;
+
+/**
+ * Published entries whose structure contains the fragment (substructure) or is the same molecule
+ * (exact: equal openchemlib idcodes), in accession order, at most `limit`.
+ *
+ * Substructure search screens in PostgreSQL first — a revision can only contain the fragment when
+ * every bit of the fragment's index is set in its own (`ss_index & f = f`) — and runs
+ * openchemlib's atom-by-atom match only on the rows that pass.
+ */
+export async function searchStructures(ds: DataSource, request: StructureSearchRequest) {
+  let query: { fragment: Molecule; index: number[]; indexBits: string };
+  try {
+    query = fragmentOf(request.smiles);
+  } catch (err) {
+    const reason = String((err as Error).message ?? err).replace(/^Class\$\S+\s*/, '');
+    throw new AppError('UNREADABLE_STRUCTURE', 400, `The SMILES could not be read: ${reason}`, {
+      details: [{ path: 'smiles', message: reason, code: 'custom' }],
+    });
+  }
+  const started = performance.now();
+  await refreshStructureKeys(ds);
+  const from = `FROM structure_keys sk JOIN revisions r ON r.id = sk.revision_id AND r.state = 'published'
+    AND r.content_sha256 = sk.content_sha256 JOIN entries e ON e.id = r.entry_id`;
+
+  if (request.mode === 'exact') {
+    const idcode = readStructure(request.smiles, 'smiles').getIDCode();
+    const rows: CandidateRow[] = await ds.query(
+      `SELECT ${HIT_COLUMNS} ${from} WHERE sk.idcode = $1 ORDER BY e.accession LIMIT $2`,
+      [idcode, request.limit + 1],
+    );
+    return answer(rows.slice(0, request.limit), rows.length, rows.length > request.limit, started, request);
+  }
+
+  const hits: CandidateRow[] = [];
+  let screened = 0;
+  let after = '';
+  for (;;) {
+    const rows: CandidateRow[] = await ds.query(
+      `SELECT ${HIT_COLUMNS} ${from}
+        WHERE sk.idcode IS NOT NULL AND (sk.ss_index & $1::bit(512)) = $1::bit(512) AND e.accession > $2
+        ORDER BY e.accession LIMIT ${BATCH}`,
+      [query.indexBits, after],
+    );
+    for (const row of rows) {
+      screened += 1;
+      if (containsFragment(query.fragment, query.index, row.idcode, row.bits)) hits.push(row);
+      if (hits.length > request.limit) return answer(hits.slice(0, request.limit), screened, true, started, request);
+    }
+    if (rows.length < BATCH) return answer(hits, screened, false, started, request);
+    after = rows.at(-1)!.accession;
+  }
+}
+
+function answer(rows: CandidateRow[], screened: number, truncated: boolean, started: number, request: StructureSearchRequest) {
+  return {
+    mode: request.mode,
+    smiles: request.smiles,
+    entries: rows.map(({ idcode: _i, bits: _b, ...hit }) => hit),
+    /** Rows that passed the index screen and were matched atom by atom. */
+    screened,
+    truncated,
+    tookMs: Math.round(performance.now() - started),
+  };
+}
