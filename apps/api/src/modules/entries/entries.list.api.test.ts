@@ -79,7 +79,9 @@ describe('GET /entries filters', () => {
       let cursor: string | null = null;
       let pages = 0;
       do {
-        const res = await list({ q: tag, sort, order, limit: 2, ...(cursor ? { cursor } : {}) }).expect(200);
+        const query: Record<string, string | number> = { q: tag, sort, order, limit: 2 };
+        if (cursor) query.cursor = cursor;
+        const res: { body: { entries: { accession: string }[]; nextCursor: string | null } } = await list(query).expect(200);
         seen.push(...accessions(res.body));
         cursor = res.body.nextCursor;
         pages += 1;
