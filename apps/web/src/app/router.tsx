@@ -9,6 +9,7 @@ import type { Role } from '../lib/roles';
 import { AdminSection } from './routes/admin/admin-section';
 import { AppRoot } from './routes/app-root';
 import { RequireRole } from './routes/require-role';
+import { ToolsSection } from './routes/tools/tools-section';
 
 type PageModule = { default: ComponentType };
 
@@ -61,11 +62,22 @@ export const routes: RouteObject[] = [
               children: [
                 { index: true, element: <Navigate to={paths.adminUsers.path} replace /> },
                 page(paths.adminUsers.path, () => import('./routes/admin/users')),
-                page(paths.adminKeys.path, () => import('./routes/admin/access-keys')),
+                page(paths.adminKeys.path, () => import('./routes/admin/keys')),
                 page(paths.adminOutbox.path, () => import('./routes/admin/outbox')),
               ],
             },
           ]),
+          {
+            path: paths.tools.path,
+            element: <ToolsSection />,
+            errorElement: <RouteError />,
+            children: [
+              { index: true, element: <Navigate to={paths.toolsKeys.path} replace /> },
+              page(paths.toolsKeys.path, () => import('./routes/tools/keys')),
+              page(paths.toolsIsotopes.path, () => import('./routes/tools/isotopes')),
+              page(paths.toolsApi.path, () => import('./routes/tools/api-docs')),
+            ],
+          },
           // Curators read the audit log too (PRODUCT.md), so it sits outside the admin-only group.
           onlyFor(paths.adminAudit.minRole, [
             {

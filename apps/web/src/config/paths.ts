@@ -25,6 +25,10 @@ export const paths = {
   adminOutbox: { path: '/admin/outbox', label: 'Outbox', minRole: 'admin' },
   adminAudit: { path: '/admin/audit', label: 'Audit log', minRole: 'curator' },
   signIn: { path: '/sign-in', label: 'Sign in', minRole: 'reader' },
+  tools: { path: '/tools', label: 'Tools', minRole: 'reader' },
+  toolsKeys: { path: '/tools/keys', label: 'Access keys', minRole: 'reader' },
+  toolsIsotopes: { path: '/tools/isotopes', label: 'Isotope calculator', minRole: 'reader' },
+  toolsApi: { path: '/tools/api', label: 'API for tools', minRole: 'reader' },
 } as const satisfies Record<string, Screen>;
 
 /** The header navigation, in order; `Admin` opens the users page, the admin pages link to each other. */
@@ -36,8 +40,26 @@ export const mainNavigation: readonly Screen[] = [
   paths.overview,
   paths.submit,
   paths.review,
+  paths.tools,
   { ...paths.adminUsers, label: 'Admin' },
 ];
+
+/** The tabs of the Tools section, open to every signed-in role. */
+export const toolsNavigation: readonly Screen[] = [paths.toolsKeys, paths.toolsIsotopes, paths.toolsApi];
+
+/**
+ * The identify page set up with a query: `from` loads that entry's published spectrum, `exclude` leaves
+ * an accession out of the candidates, `peaks` (m/z:intensity pairs) and `name` carry an unknown over.
+ */
+export function identifyHref(query: { from?: string; exclude?: string; peaks?: string; name?: string }): string {
+  const params = new URLSearchParams();
+  for (const key of ['from', 'exclude', 'peaks', 'name'] as const) {
+    const value = query[key];
+    if (value) params.set(key, value);
+  }
+  const text = params.toString();
+  return text ? `${paths.identify.path}?${text}` : paths.identify.path;
+}
 
 export const adminNavigation: readonly Screen[] = [
   paths.adminUsers,

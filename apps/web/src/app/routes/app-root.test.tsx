@@ -26,10 +26,10 @@ describe('app shell', () => {
   });
 
   it.each<[Role, string[]]>([
-    ['reader', ['Identify', 'Batch', 'Library', 'Editions', 'Overview']],
-    ['contributor', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Submit']],
-    ['curator', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Submit', 'Review desk']],
-    ['admin', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Submit', 'Review desk', 'Admin']],
+    ['reader', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Tools']],
+    ['contributor', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Submit', 'Tools']],
+    ['curator', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Submit', 'Review desk', 'Tools']],
+    ['admin', ['Identify', 'Batch', 'Library', 'Editions', 'Overview', 'Submit', 'Review desk', 'Tools', 'Admin']],
   ])('when a %s is signed in, the navigation offers exactly their screens', async (role, labels) => {
     installFakeFetch({ 'GET /api/v1/me': meReply(role) });
     renderApp('/library');
