@@ -146,4 +146,11 @@ describe('identify', () => {
     const cluster = screen.getByRole('table', { name: 'Isotope cluster: query against candidate formula' });
     expect(within(cluster).getByRole('rowheader', { name: '128' })).toBeTruthy();
   });
+  it('when opened from a batch row with ?peaks= and ?name=, fills the box and searches with those peaks', async () => {
+    const network = installFakeFetch({ ...baseRoutes(), 'POST /api/v1/identify': json(identifyAnswer()) });
+    renderApp('/identify?peaks=77%3A60%20112%3A100%20114%3A32.5&name=Unknown%20A');
+    await screen.findByRole('table', { name: 'Candidates' });
+    expect(network.made('POST', '/api/v1/identify')[0]?.body).toMatchObject({ peaks: [[77, 60], [112, 100], [114, 32.5]], limit: 10 });
+    expect((screen.getByRole('textbox', { name: /Name of the unknown/ }) as HTMLInputElement).value).toBe('Unknown A');
+  });
 });
