@@ -1,10 +1,14 @@
-import { PlaceholderPage } from '../../../components/ui/placeholder-page';
+import { PageHeader } from '../../../components/ui/page-header';
+import { OverviewCharts } from '../../../features/overview/components/overview-charts';
 
 export default function OverviewPage() {
   return (
-    <PlaceholderPage
-      title="Overview"
-      summary="Charts of the library: entries by state, by nominal mass and by element, and how the library has grown."
-    />
+    <section>
+      <PageHeader
+        title="Overview"
+        description="The library in numbers: entries by state, growth by month, nominal masses, elements, checks that need attention and how long reviews take."
+      />
+      <OverviewCharts />
+    </section>
   );
 }
