@@ -34,6 +34,17 @@ export function LibraryFilters({ filter, onApply }: { filter: LibraryFilter; onA
       className={inputClasses}
     />
   );
+  const choice =
+    <K extends 'hasRetentionIndex' | 'status'>(key: K, options: [LibraryFilter[K], string][]) =>
+    (id: string) => (
+      <select id={id} value={draft[key]} onChange={(event) => set(key, event.target.value as LibraryFilter[K])} className={inputClasses}>
+        {options.map(([value, label]) => (
+          <option key={value} value={value}>
+            {label}
+          </option>
+        ))}
+      </select>
+    );
   const submit = (event: FormEvent) => {
     event.preventDefault();
     onApply(draft);
@@ -59,27 +70,18 @@ export function LibraryFilters({ filter, onApply }: { filter: LibraryFilter; onA
         <Field label="to">{text('maxMass', 'Da', 'numeric')}</Field>
       </div>
       <Field label="Retention index">
-        {(id) => (
-          <select
-            id={id}
-            value={draft.hasRetentionIndex}
-            onChange={(event) => set('hasRetentionIndex', event.target.value as LibraryFilter['hasRetentionIndex'])}
-            className={inputClasses}
-          >
-            <option value="">either</option>
-            <option value="true">has one</option>
-            <option value="false">has none</option>
-          </select>
-        )}
+        {choice('hasRetentionIndex', [
+          ['', 'either'],
+          ['true', 'has one'],
+          ['false', 'has none'],
+        ])}
       </Field>
       <Field label="State">
-        {(id) => (
-          <select id={id} value={draft.status} onChange={(event) => set('status', event.target.value as LibraryFilter['status'])} className={inputClasses}>
-            <option value="published">published</option>
-            <option value="withdrawn">withdrawn</option>
-            <option value="any">published or withdrawn</option>
-          </select>
-        )}
+        {choice('status', [
+          ['published', 'published'],
+          ['withdrawn', 'withdrawn'],
+          ['any', 'published or withdrawn'],
+        ])}
       </Field>
       <Field label="Contributor" hint="login">
         {text('contributor', 'e.g. dokafor')}

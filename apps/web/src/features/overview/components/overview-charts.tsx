@@ -4,14 +4,8 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { useOverview, type LibraryOverview } from '../api/get-overview';
 import { OverviewChart } from './overview-chart';
 
-const STATE_TEXT: Record<string, string> = {
-  draft: 'draft',
-  in_review: 'in review',
-  needs_changes: 'needs changes',
-  published: 'published',
-  superseded: 'superseded',
-  withdrawn: 'withdrawn',
-};
+/** `in_review` → `in review`, the way the state badges write it. */
+const stateText = (state: string) => state.replace(/_/g, ' ');
 
 const sum = (values: readonly number[]) => values.reduce((a, b) => a + b, 0);
 
@@ -26,10 +20,10 @@ function Charts({ data }: { data: LibraryOverview }) {
     <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
       <OverviewChart
         title="Entries by state"
-        summary={data.entriesByState.map((s) => `${s.entries} ${STATE_TEXT[s.state] ?? s.state}`).join(', ')}
+        summary={data.entriesByState.map((s) => `${s.entries} ${stateText(s.state)}`).join(', ')}
         note="Entries with a revision in each state; one entry can count in two (published r1, r2 in review)."
         categoryLabel="State"
-        categories={data.entriesByState.map((s) => STATE_TEXT[s.state] ?? s.state)}
+        categories={data.entriesByState.map((s) => stateText(s.state))}
         series={[{ name: 'Entries', kind: 'bar', tone: 'ink', values: data.entriesByState.map((s) => s.entries) }]}
         yName="entries"
       />
