@@ -15,6 +15,9 @@ if (pending) {
   process.exit(1);
 }
 const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
+// When PostgreSQL restarts, idle clients die and the pool says so here before replacing them; an
+// 'error' event without a listener would end the process.
+sessionPool.on('error', (err) => logger.warn({ err }, 'session pool lost a connection; it reconnects on the next request'));
 const app = createApp({ env, dataSource, logger, sessionPool });
 const mail = createMailDispatcher(
   dataSource,

@@ -14,6 +14,30 @@ function body(code: string, message: string, details?: unknown) {
   return { error: details === undefined ? { code, message } : { code, message, details } };
 }
 
+// PostgreSQL error codes that mean "the server is not there right now" (PostgreSQL docs, appendix A
+// "Error Codes"): class 08 connection exceptions, 57P01–57P03 admin/crash shutdown and cannot connect
+// now, 53300 too many connections.
+const DATABASE_DOWN_CODES = new Set(['08000', '08001', '08003', '08004', '08006', '57P01', '57P02', '57P03', '53300']);
+// Socket errors: during a request the database is the only server the API talks to (mail goes
+// through the outbox dispatcher, sign-in errors arrive wrapped by passport).
+const SOCKET_DOWN_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH']);
+// What node-postgres and TypeORM say when a connection dies or cannot be had, without a code.
+const DATABASE_DOWN_MESSAGES =
+  /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection is not established|the database system is (?:starting up|shutting down|in recovery mode)/i;
+
+/** True when `err` (or what it wraps: TypeORM's driverError, a cause, an AggregateError's errors) says the database is unreachable. */
+export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
+  if (err === null || typeof err !== 'object' || depth > 4) return false;
+  const e = err as { code?: unknown; message?: unknown; driverError?: unknown; cause?: unknown; errors?: unknown };
+  if (typeof e.code === 'string' && (DATABASE_DOWN_CODES.has(e.code) || SOCKET_DOWN_CODES.has(e.code))) return true;
+  if (typeof e.message === 'string' && DATABASE_DOWN_MESSAGES.test(e.message)) return true;
+  const inner = [e.driverError, e.cause, ...(Array.isArray(e.errors) ? e.errors : [])];
+  return inner.some((x) => isDatabaseUnavailable(x, depth + 1));
+}
+
+/** Seconds a client should wait before trying again while the database is away. */
+export const DATABASE_RETRY_AFTER_S = 5;
+
 /** 404 for any /api or /auth path that no route answered. */
 export const apiNotFound: RequestHandler = (req, res) => {
   res.status(404).json(body('ROUTE_NOT_FOUND', `No route for ${req.method} ${req.path}`));
@@ -21,8 +45,8 @@ export const apiNotFound: RequestHandler = (req, res) => {
 
 /**
  * Maps every error to a JSON body: zod → 400 with the issues, AppError → its status, errors from
- * body parsing (malformed JSON, too large) → their 4xx, anything else → a logged 500 with the
- * request id and a generic message.
+ * body parsing (malformed JSON, too large) → their 4xx, the database being unreachable → 503 with
+ * Retry-After, anything else → a logged 500 with the request id and a generic message.
  */
 export const errorMiddleware: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (res.headersSent) {
@@ -48,6 +72,14 @@ export const errorMiddleware: ErrorRequestHandler = (err: unknown, req, res, _ne
     } else {
       res.status(400).json(body('BAD_UPLOAD', `The upload was refused: ${err.message}`));
     }
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    req.log?.warn({ err }, 'database unavailable');
+    res
+      .status(503)
+      .set('Retry-After', String(DATABASE_RETRY_AFTER_S))
+      .json(body('DATABASE_UNAVAILABLE', `The library database is not answering; try again in ${DATABASE_RETRY_AFTER_S} s`));
     return;
   }
   const e = (err ?? {}) as HttpishError;

@@ -47,6 +47,8 @@ export async function createTestContext(overrides: Record<string, string> = {}):
   const ds = createDataSource(env.DATABASE_URL);
   await ds.initialize();
   const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 2 });
+  // An idle client that the server drops (a restart) is reported here; the pool replaces it. Unheard, it would crash the run.
+  sessionPool.on('error', () => undefined);
   const app = createApp({ env, dataSource: ds, logger: createLogger('silent'), sessionPool });
   return {
     app,
