@@ -142,9 +142,14 @@ describe('identify', () => {
     const figure = await screen.findByRole('figure', { name: /Mirror view: Unknown \(query\) above, IF-000077 r1 · 2-Chlorotoluene/ });
     expect(figure).toBeTruthy();
     await waitFor(() => expect(network.made('GET', '/api/v1/entries/IF-000077')[0]?.url.searchParams.get('revision')).toBe('1'));
-    // The query's cluster against the theoretical cluster of C7H7Cl (126: 100, 128: about 32 — one 37Cl, SCIENCE.md §1).
+    // The query's cluster against the theoretical cluster of C7H7Cl, aligned from M: the query's M+2 at
+    // m/z 114 (32.5) beside the formula's at m/z 128, about 32 % for one 37Cl (SCIENCE.md §1).
     const cluster = screen.getByRole('table', { name: 'Isotope cluster: query against candidate formula' });
-    expect(within(cluster).getByRole('rowheader', { name: '128' })).toBeTruthy();
+    const m2 = within(cluster).getByRole('rowheader', { name: 'M+2' }).closest('tr') as HTMLElement;
+    const [, observed, theoretical] = Array.from(m2.children).map((cell) => cell.textContent ?? '');
+    expect(observed).toBe('11432.5');
+    expect(theoretical?.startsWith('128')).toBe(true);
+    expect(Number(theoretical?.slice(3))).toBeCloseTo(32.0, 0);
   });
   it('when opened from a batch row with ?peaks= and ?name=, fills the box and searches with those peaks', async () => {
     const network = installFakeFetch({ ...baseRoutes(), 'POST /api/v1/identify': json(identifyAnswer()) });

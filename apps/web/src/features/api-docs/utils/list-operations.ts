@@ -133,6 +133,8 @@ export function listOperations(document: OpenApiDocument, origin: string): ApiOp
       const { access, scopes } = accessOf(document, op.security, (op as Record<string, unknown>)['x-scopes'] ?? (op as Record<string, unknown>)['x-scope']);
       let filled = path;
       for (const p of parameters.filter((x) => x.in === 'path')) filled = filled.replace(`{${p.name}}`, encodeURI(p.example));
+      // A template segment the document forgot to declare still needs a value.
+      filled = filled.replace(/\{([^}]+)\}/g, (_, name: string) => knownPathValues[name] ?? shellVariable(name));
       const query = parameters.filter((p) => p.in === 'query' && p.required).map((p) => `${encodeURIComponent(p.name)}=${encodeURIComponent(p.example)}`);
       const url = `${origin}${filled}${query.length > 0 ? `?${query.join('&')}` : ''}`;
       const body = knownBodies[`${upper} ${path}`] ?? exampleFromSchema(requestSchema);

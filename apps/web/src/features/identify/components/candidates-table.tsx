@@ -75,6 +75,7 @@ export function CandidatesTable({ candidates, reading, selectedIndex, onSelect, 
                   <button
                     type="button"
                     aria-pressed={selected}
+                    data-print="hide"
                     aria-label={`Mirror view of ${label}`}
                     onClick={() => onSelect(index)}
                     className={`rounded border px-2 text-xs font-bold ${selected ? 'border-ink bg-ink text-paper-raised' : 'border-rule text-ink hover:border-ink'}`}

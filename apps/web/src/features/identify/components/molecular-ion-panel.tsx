@@ -92,7 +92,9 @@ export function MolecularIonPanel({ reading }: { reading: Reading | null }) {
                     <td className={`${bodyCell} text-right tabular-nums`}>
                       {s.agreement === null || s.agreement === undefined ? '—' : `${(s.agreement * 100).toFixed(0)} %`}
                     </td>
-                    <td className={`${bodyCell} text-ink-soft`}>{s.rulesPassed?.join(', ') ?? '—'}</td>
+                    <td className={`${bodyCell} text-xs leading-5 text-ink-soft`} title={s.rulesPassed?.join(', ')}>
+                      {s.rulesPassed ? `${s.rulesPassed.length} rules` : '—'}
+                    </td>
                   </tr>
                 ))}
               </tbody>

@@ -43,7 +43,8 @@ function splitBlocks(text: string): TextBlock[] {
 }
 
 const isComment = (line: string) => line.trimStart().startsWith('#');
-const hasWords = (line: string) => /[a-df-zA-DF-Z]/.test(line.replace(/#.*/, ''));
+/** A header row starts with a name, a data row with a number. */
+const isHeader = (line: string) => !/^\s*[+-]?(\d|\.\d)/.test(line);
 
 /** "line 3, column 5: …" from a block becomes the same place counted from the top of the file. */
 function shiftLines(message: string, offset: number): string {
@@ -63,8 +64,8 @@ function readTextBlocks(text: string, fileName: string): NamedSpectrum[] {
     const firstData = block.lines.find((line) => !isComment(line)) ?? '';
     let body = block.lines.join('\n');
     let offset = block.firstLine - 1;
-    if (index === 0 && hasWords(firstData)) header = firstData;
-    else if (header !== null && !hasWords(firstData)) {
+    if (index === 0 && isHeader(firstData)) header = firstData;
+    else if (header !== null && !isHeader(firstData)) {
       body = `${header}\n${body}`;
       offset -= 1;
     }
