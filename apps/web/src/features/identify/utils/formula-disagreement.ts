@@ -6,7 +6,10 @@ import type { Candidate, Reading } from '../api/identify-schemas';
  * empty when it agrees or when there is nothing to compare (no reading, or M likely absent — then the
  * highest cluster is a fragment and says nothing firm about the molecule).
  */
-export function formulaDisagreements(candidate: Pick<Candidate, 'formula' | 'nominalMass'>, reading: Reading | null): string[] {
+export function formulaDisagreements(
+  candidate: Pick<Candidate, 'formula' | 'nominalMass'>,
+  reading: Pick<Reading, 'likelyAbsent' | 'molecularIonMz' | 'chlorine' | 'bromine'> | null,
+): string[] {
   if (reading === null || reading.likelyAbsent || reading.molecularIonMz === null) return [];
   const reasons: string[] = [];
   if (candidate.nominalMass !== reading.molecularIonMz) {
