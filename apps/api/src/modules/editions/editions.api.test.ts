@@ -47,6 +47,11 @@ describe('editions', () => {
     expect(shown.diff.changed).toContainEqual(expect.objectContaining({ accession: a.accession, revision: 2, previousRevision: 1 }));
 
     // The export reads back to the same peaks (round trip through our JCAMP-DX writer and reader).
+    const withEditions = (await author.agent.get(`/api/v1/entries/${a.accession}`).expect(200)).body.entry.editions;
+    expect(withEditions.slice(0, 2)).toEqual([
+      expect.objectContaining({ label: second, revision: 2 }),
+      expect.objectContaining({ label: first, revision: 1 }),
+    ]);
     const jdx = await author.agent.get(`/api/v1/editions/${second}/jcamp`).buffer(true).parse(asText).expect(200);
     const blocks = readJcamp(jdx.body as string);
     expect(blocks.length).toBe(shown.edition.revisionCount);

@@ -26,6 +26,8 @@ export interface EntryView {
   withdrawnReason: string | null;
   revision: RevisionView;
   revisions: RevisionSummary[];
+  /** The frozen editions that hold one of this entry's revisions, newest first. */
+  editions: { label: string; revision: number; createdAt: string }[];
 }
 
 async function revisionViews(m: EntityManager, entry: EntryRow, rows: RevisionRow[]): Promise<RevisionView[]> {
@@ -243,6 +245,12 @@ export async function getEntry(
     chosen = rows.find((r) => r.state === 'published') ?? rows.findLast((r) => r.state === 'withdrawn') ?? rows.at(-1)!;
   }
   const views = await revisionViews(m, entry, rows);
+  const editions: { label: string; revision: number; createdAt: Date }[] = await m.query(
+    `SELECT ed.label, r.number AS revision, ed.created_at AS "createdAt"
+       FROM edition_revisions er JOIN editions ed ON ed.id = er.edition_id JOIN revisions r ON r.id = er.revision_id
+      WHERE er.entry_id = $1 ORDER BY ed.created_at DESC, ed.id DESC`,
+    [entry.id],
+  );
   return {
     accession: entry.accession,
     createdAt: entry.createdAt.toISOString(),
@@ -250,6 +258,7 @@ export async function getEntry(
     withdrawnReason: entry.withdrawnReason,
     revision: views.find((v) => v.id === chosen.id)!,
     revisions: views.map(toRevisionSummary),
+    editions: editions.map((e) => ({ label: e.label, revision: e.revision, createdAt: new Date(e.createdAt).toISOString() })),
   };
 }
 
