@@ -158,4 +158,11 @@ describe('identify', () => {
     expect(network.made('POST', '/api/v1/identify')[0]?.body).toMatchObject({ peaks: [[77, 60], [112, 100], [114, 32.5]], limit: 10 });
     expect((screen.getByRole('textbox', { name: /Name of the unknown/ }) as HTMLInputElement).value).toBe('Unknown A');
   });
+  it('when the rate limit answers 429, says to wait and try again', async () => {
+    installFakeFetch({ ...baseRoutes(), 'POST /api/v1/identify': apiError(429, 'RATE_LIMITED', 'At most 30 searches a minute; try again in 12 s.') });
+    renderApp('/identify');
+    await pasteAndIdentify(unknownText);
+    expect(await screen.findByText(/Too many searches in a short time/)).toBeTruthy();
+    expect(screen.getByText('At most 30 searches a minute; try again in 12 s.')).toBeTruthy();
+  });
 });

@@ -6,6 +6,7 @@ import { peakListText } from '../../../components/spectrum/peak-list-text';
 import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { entryHref, paths } from '../../../config/paths';
+import { isApiError } from '../../../lib/api-error';
 import { describeErrorDetails } from '../../../lib/describe-error';
 import { useEditionLabels } from '../../../features/identify/api/get-edition-labels';
 import { useEntrySpectrum } from '../../../features/identify/api/get-entry-spectrum';
@@ -115,7 +116,14 @@ export default function IdentifyPage() {
       </form>
       {identify.isError ? (
         <div className="grid gap-2">
-          <ErrorNotice title="The search failed" error={identify.error} />
+          <ErrorNotice
+            title={
+              isApiError(identify.error) && identify.error.status === 429
+                ? 'Too many searches in a short time: wait a few seconds, then press Identify again'
+                : 'The search failed'
+            }
+            error={identify.error}
+          />
           {describeErrorDetails(identify.error).length > 0 ? (
             <ul className="grid gap-1 text-sm text-copper">
               {describeErrorDetails(identify.error).map((line) => (
