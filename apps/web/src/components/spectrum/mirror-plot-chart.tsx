@@ -31,9 +31,11 @@ export function MirrorPlotChart({ top, bottom, heightPx = 420 }: MirrorPlotChart
       tooltip: { ...base.tooltip, formatter: (p: { seriesName?: string; value?: unknown }) => stickTooltip(p.seriesName ?? '', p.value) },
       yAxis: {
         type: 'value' as const,
-        min: -110,
-        max: 110,
-        interval: 50,
+        // Ticks are counted from min, so min and max must be multiples of the interval for the
+        // labels to read 100 … 0 … 100; the band beyond 100 leaves room for the peak labels.
+        min: -120,
+        max: 120,
+        interval: 20,
         axisLabel: { color: colors.inkSoft, formatter: (v: number) => (Math.abs(v) > 100 ? '' : String(Math.abs(v))) },
         axisLine: { show: true, lineStyle: { color: colors.rule } },
         splitLine: { lineStyle: { color: colors.ruleFaint, type: 'dashed' as const } },
