@@ -35,6 +35,15 @@ export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
   return inner.some((x) => isDatabaseUnavailable(x, depth + 1));
 }
 
+// 22021 character_not_in_repertoire (a NUL byte in text), 22P05 untranslatable_character (\u0000 in
+// jsonb): PostgreSQL cannot store the text, so the request, not the server, is at fault.
+const UNSTORABLE_TEXT_CODES = new Set(['22021', '22P05']);
+
+function isUnstorableText(err: unknown): boolean {
+  const e = err as { code?: unknown; driverError?: { code?: unknown } } | null;
+  return typeof e === 'object' && e !== null && (UNSTORABLE_TEXT_CODES.has(String(e.code)) || UNSTORABLE_TEXT_CODES.has(String(e.driverError?.code)));
+}
+
 /** Seconds a client should wait before trying again while the database is away. */
 export const DATABASE_RETRY_AFTER_S = 5;
 
@@ -72,6 +81,10 @@ export const errorMiddleware: ErrorRequestHandler = (err: unknown, req, res, _ne
     } else {
       res.status(400).json(body('BAD_UPLOAD', `The upload was refused: ${err.message}`));
     }
+    return;
+  }
+  if (isUnstorableText(err)) {
+    res.status(400).json(body('INVALID_TEXT', 'The text holds a NUL character (\\u0000) or a byte sequence that is not UTF-8; remove it'));
     return;
   }
   if (isDatabaseUnavailable(err)) {

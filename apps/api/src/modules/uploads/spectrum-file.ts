@@ -50,7 +50,8 @@ export function readSpectrumFile(fileName: string, buf: Buffer): { format: 'jcam
     throw new AppError('UNSUPPORTED_FILE', 415, `${fileName}: expected a .jdx/.dx/.jcamp, .csv, .tsv or .txt file`);
   }
   if (looksBinary(buf)) throw new AppError('BINARY_FILE', 400, `${fileName} is not a text file`);
-  const text = buf.toString('utf8');
+  // Old Mac files end lines with a lone CR; one LF for each keeps every offset the readers report.
+  const text = buf.toString('utf8').replace(/\r(?!\n)/g, '\n');
   const isJcamp = /^\s*##/m.test(text.slice(0, 4096)) || /\.(jdx|dx|jcamp|jcm)$/i.test(fileName);
   try {
     if (isJcamp) {
