@@ -37,6 +37,11 @@ export interface SpectrumIndexOptions {
   method?: SimilarityMethod;
   /** Default number of hits; default 10. */
   k?: number;
+  /**
+   * Room to reserve up front when the library size is known (spectra, and peaks after normalisation):
+   * spares the repeated growth of large arrays while loading. A guess is fine; the index grows beyond it.
+   */
+  reserve?: { spectra: number; peaks: number };
 }
 
 /** One search hit: `score` is the forward score; `reverseScore` is present (and ranks) in reverse mode. */

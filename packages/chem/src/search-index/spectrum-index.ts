@@ -29,6 +29,8 @@ import { MAX_MZ } from '../spectrum/validate-peaks';
 import type { PeakList } from '../types';
 
 const OFFSET_COUNT = MAX_MZ + 2;
+// ln I of the peaks of the spectrum being added (a nominal spectrum has at most MAX_MZ peaks).
+const LN_SCRATCH = new Float64Array(MAX_MZ + 1);
 
 /** Per-spectrum columns, one element per slot. NaN in nominalMass / retentionIndex = not given. */
 interface SlotColumns {
@@ -130,6 +132,8 @@ export class SpectrumIndex {
   private slot: SlotColumns = emptySlotColumns();
   private peakMz = new Uint16Array(0);
   private peakRelIntensity = new Float32Array(0);
+  // q = I^0.6 of each peak, kept only until the first pack so that a bulk load computes it once.
+  private loadingQ: Float32Array | undefined = new Float32Array(0);
   private readonly slotById = new Map<number, number>();
   private main: PostingLists = emptyLists();
   private delta: PostingLists = emptyLists();
@@ -144,6 +148,14 @@ export class SpectrumIndex {
   constructor(options: SpectrumIndexOptions = {}) {
     this.defaultMethod = assertSimilarityMethod(options.method ?? 'composite');
     this.defaultK = checkHitCount(options.k ?? 10);
+    if (options.reserve !== undefined) {
+      const { spectra, peaks } = options.reserve;
+      if (!Number.isInteger(spectra) || spectra < 0 || !Number.isInteger(peaks) || peaks < 0) {
+        throw new ChemError('INVALID_ARGUMENT', 'reserve.spectra and reserve.peaks must be integers ≥ 0', { field: 'reserve' });
+      }
+      this.ensureSlotCapacity(spectra);
+      this.ensurePeakCapacity(peaks);
+    }
   }
 
   /** Number of spectra in the index. */
@@ -187,25 +199,42 @@ export class SpectrumIndex {
     this.slot.nominalMass[slot] = nominalMass;
     this.slot.retentionIndex[slot] = retentionIndex;
     this.slot.elementsMask[slot] = Number.isNaN(elementsMask) ? 0 : elementsMask >>> 0;
+    // One pass for every per-spectrum sum (approximate values for bounds; the exact scores come from
+    // the kernels). Entropy weights as entropyWeights computes them, from ln I kept in a scratch array.
+    const base = this.peakCount;
+    const lnScratch = LN_SCRATCH;
     let cosineNormSq = 0;
     let weightedNormSq = 0;
-    let plainTotal = 0;
+    let total = 0;
+    let sumILnI = 0;
     for (let i = 0; i < length; i++) {
       const mz = view.mz[i] as number;
       const relIntensity = view.relIntensity[i] as number;
-      this.peakMz[this.peakCount + i] = mz;
-      this.peakRelIntensity[this.peakCount + i] = relIntensity;
-      const w = mz * mz * mz * postingWeight(relIntensity);
+      const lnI = Math.log(relIntensity);
+      const q = Math.exp(STEIN_SCOTT_INTENSITY_POWER * lnI);
+      const w = mz * mz * mz * q;
+      this.peakMz[base + i] = mz;
+      this.peakRelIntensity[base + i] = relIntensity;
+      if (this.loadingQ !== undefined) this.loadingQ[base + i] = q;
+      lnScratch[i] = lnI;
       cosineNormSq += relIntensity * relIntensity;
       weightedNormSq += w * w;
-      plainTotal += relIntensity;
+      total += relIntensity;
+      sumILnI += relIntensity * lnI;
     }
-    const weights = entropyWeights(view, true);
+    const entropy = Math.log(total) - sumILnI / total;
+    let exponent = 1;
+    let reweightedTotal = total;
+    if (entropy < 3) {
+      exponent = 0.25 + 0.25 * entropy;
+      reweightedTotal = 0;
+      for (let i = 0; i < length; i++) reweightedTotal += Math.exp(exponent * (lnScratch[i] as number));
+    }
     this.slot.cosineNormSq[slot] = cosineNormSq;
     this.slot.weightedNormSq[slot] = weightedNormSq;
-    this.slot.entropyExponent[slot] = weights.exponent / STEIN_SCOTT_INTENSITY_POWER;
-    this.slot.entropyLnTotal[slot] = Math.log(weights.total);
-    this.slot.plainLnTotal[slot] = Math.log(plainTotal);
+    this.slot.entropyExponent[slot] = exponent / STEIN_SCOTT_INTENSITY_POWER;
+    this.slot.entropyLnTotal[slot] = Math.log(reweightedTotal);
+    this.slot.plainLnTotal[slot] = Math.log(total);
     this.peakCount += length;
     this.slotCount++;
     this.liveCount++;
@@ -232,8 +261,10 @@ export class SpectrumIndex {
    * spectra. Searches do this on their own when needed; call it after a bulk load to pay the cost once.
    */
   pack(): void {
+    const loadingQ = this.deadCount === 0 ? this.loadingQ : undefined;
+    this.loadingQ = undefined;
     this.compactSlots();
-    this.main = this.buildLists(0, this.slotCount);
+    this.main = this.buildLists(0, this.slotCount, loadingQ);
     this.mainSlotEnd = this.slotCount;
     this.delta = emptyLists();
     this.deltaDirty = false;
@@ -251,6 +282,7 @@ export class SpectrumIndex {
         this.peakRelIntensity,
         ...lists(this.main),
         ...lists(this.delta),
+        ...(this.loadingQ === undefined ? [] : [this.loadingQ]),
       ]),
       scratchBytes: s === undefined ? 0 : bytes([s.count, s.sum, s.queryNormSq, s.ratioSum, s.lastRatio, s.upper, s.lower, s.checked]),
       peakCount: this.peakCount,
@@ -349,14 +381,16 @@ export class SpectrumIndex {
     }
   }
 
-  private buildLists(fromSlot: number, toSlot: number): PostingLists {
+  private buildLists(fromSlot: number, toSlot: number, knownQ?: Float32Array): PostingLists {
     const offsets = new Uint32Array(OFFSET_COUNT);
+    const { alive, start: slotStart, length: slotLength } = this.slot;
+    const { peakMz, peakRelIntensity } = this;
     for (let slot = fromSlot; slot < toSlot; slot++) {
-      if (this.slot.alive[slot] === 0) continue;
-      const start = this.slot.start[slot] as number;
-      const end = start + (this.slot.length[slot] as number);
+      if (alive[slot] === 0) continue;
+      const start = slotStart[slot] as number;
+      const end = start + (slotLength[slot] as number);
       for (let p = start; p < end; p++) {
-        const next = (this.peakMz[p] as number) + 1;
+        const next = (peakMz[p] as number) + 1;
         offsets[next] = (offsets[next] as number) + 1;
       }
     }
@@ -366,15 +400,15 @@ export class SpectrumIndex {
     const weights = new Float32Array(total);
     const cursor = offsets.slice();
     for (let slot = fromSlot; slot < toSlot; slot++) {
-      if (this.slot.alive[slot] === 0) continue;
-      const start = this.slot.start[slot] as number;
-      const end = start + (this.slot.length[slot] as number);
+      if (alive[slot] === 0) continue;
+      const start = slotStart[slot] as number;
+      const end = start + (slotLength[slot] as number);
       for (let p = start; p < end; p++) {
-        const mz = this.peakMz[p] as number;
+        const mz = peakMz[p] as number;
         const position = cursor[mz] as number;
         cursor[mz] = position + 1;
         slots[position] = slot;
-        weights[position] = postingWeight(this.peakRelIntensity[p] as number);
+        weights[position] = knownQ !== undefined ? (knownQ[p] as number) : postingWeight(peakRelIntensity[p] as number);
       }
     }
     return { offsets, slots, weights };
@@ -425,6 +459,7 @@ export class SpectrumIndex {
   private ensurePeakCapacity(n: number): void {
     this.peakMz = growTypedArray(this.peakMz, n);
     this.peakRelIntensity = growTypedArray(this.peakRelIntensity, n);
+    if (this.loadingQ !== undefined) this.loadingQ = growTypedArray(this.loadingQ, n);
   }
 
   private ensureScratch(): NonNullable<SpectrumIndex['scratch']> {

@@ -62,21 +62,32 @@ export function simulatedReplicate(
 }
 
 /**
- * A simulated library: `count` spectra, some in families (a parent and perturbed relatives, so that
- * near neighbours exist, as for homologues), the rest independent.
+ * Simulated library spectra one at a time: `count` spectra, some in families (a parent and perturbed
+ * relatives, so that near neighbours exist, as for homologues), the rest independent. The same seed
+ * gives the same spectra as {@link simulatedLibrary}.
+ * @example
+ * for (const peaks of simulatedSpectra(1000, 42)) index.add(id++, peaks);
+ */
+export function* simulatedSpectra(count: number, seed: number, options: SimulatedSpectrumOptions = {}): Generator<Peak[]> {
+  const random = seededRandom(seed);
+  let made = 0;
+  while (made < count) {
+    const parent = simulatedSpectrum(random, options);
+    yield parent;
+    made++;
+    const relatives = random() < 0.3 ? 1 + Math.floor(random() * 4) : 0;
+    for (let i = 0; i < relatives && made < count; i++) {
+      yield simulatedReplicate(parent, random, { noise: 0.4, dropFraction: 0.2, extraPeaks: 5, maxMz: options.maxMz });
+      made++;
+    }
+  }
+}
+
+/**
+ * A simulated library as an array: the spectra of {@link simulatedSpectra}.
  * @example
  * simulatedLibrary(1000, 42).length; // 1000
  */
 export function simulatedLibrary(count: number, seed: number, options: SimulatedSpectrumOptions = {}): Peak[][] {
-  const random = seededRandom(seed);
-  const library: Peak[][] = [];
-  while (library.length < count) {
-    const parent = simulatedSpectrum(random, options);
-    library.push(parent);
-    const relatives = random() < 0.3 ? 1 + Math.floor(random() * 4) : 0;
-    for (let i = 0; i < relatives && library.length < count; i++) {
-      library.push(simulatedReplicate(parent, random, { noise: 0.4, dropFraction: 0.2, extraPeaks: 5, maxMz: options.maxMz }));
-    }
-  }
-  return library;
+  return [...simulatedSpectra(count, seed, options)];
 }

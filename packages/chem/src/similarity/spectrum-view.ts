@@ -1,6 +1,4 @@
-import { ChemError } from '../errors/chem-error';
-import { normalizeSpectrum } from '../spectrum/normalize-spectrum';
-import { validatePeaks } from '../spectrum/validate-peaks';
+import { normalizedArrays } from '../spectrum/normalized-arrays';
 import type { PeakList } from '../types';
 
 /**
@@ -23,28 +21,9 @@ export interface SpectrumView {
  * @param field - name used in error fields (`query`, `library`, ...).
  * @throws {ChemError} as {@link validatePeaks} and {@link normalizeSpectrum} do, with `field` prefixed.
  * @example
- * prepareSpectrum([[43, 1000], [58, 250]]).relIntensity; // Float64Array [100, 25]
+ * prepareSpectrum([[43, 1000], [58, 250]]).relIntensity; // [100, 25]
  */
 export function prepareSpectrum(peaks: PeakList, field = 'peaks'): SpectrumView {
-  validatePeaks(peaks, field);
-  const normalized = normalizeSpectrumWithField(peaks, field);
-  const mz = new Float64Array(normalized.length);
-  const relIntensity = new Float64Array(normalized.length);
-  normalized.forEach(([peakMz, peakRelIntensity], i) => {
-    mz[i] = peakMz;
-    relIntensity[i] = peakRelIntensity;
-  });
-  return { mz, relIntensity, start: 0, end: normalized.length };
-}
-
-function normalizeSpectrumWithField(peaks: PeakList, field: string): PeakList {
-  try {
-    return normalizeSpectrum(peaks);
-  } catch (error) {
-    if (error instanceof ChemError && error.field !== undefined && field !== 'peaks') {
-      const renamed = error.field.replace(/^peaks/, field);
-      throw new ChemError(error.code, error.message.replace(/^peaks/, field), { field: renamed });
-    }
-    throw error;
-  }
+  const { mz, relIntensity } = normalizedArrays(peaks, 'nominal', field);
+  return { mz, relIntensity, start: 0, end: mz.length };
 }

@@ -1,9 +1,7 @@
 import { ChemError } from '../errors/chem-error';
 import type { Peak, PeakList } from '../types';
 import { applyNoiseThreshold } from './apply-noise-threshold';
-import { basePeak } from './base-peak';
-import { mergeDuplicateMz } from './merge-duplicate-mz';
-import { validatePeaks } from './validate-peaks';
+import { normalizedArrays } from './normalized-arrays';
 
 /** Options of {@link normalizeSpectrum}. */
 export interface NormalizeSpectrumOptions {
@@ -17,7 +15,7 @@ export interface NormalizeSpectrumOptions {
  * Puts a spectrum in the one form that similarity scores and the search index work on.
  *
  * Steps: validate; round m/z (nominal by default, `Math.round`); sort by m/z; merge equal m/z by summing
- * intensities ({@link mergeDuplicateMz}); drop zero intensities; scale so the base peak is 100; apply the
+ * intensities (as {@link mergeDuplicateMz} does); drop zero intensities; scale so the base peak is 100; apply the
  * noise threshold. Relative intensities are rounded to single precision (`Math.fround`, relative error
  * below 6e-8, far finer than any measurement) so that packed Float32 stores such as the search index hold
  * exactly the values that {@link compareSpectra} scores. Normalising a normalised spectrum returns the same
@@ -35,25 +33,8 @@ export function normalizeSpectrum(peaks: PeakList, options: NormalizeSpectrumOpt
   if (mzRounding !== 'nominal' && mzRounding !== 'none') {
     throw new ChemError('INVALID_ARGUMENT', "mzRounding must be 'nominal' or 'none'", { field: 'mzRounding' });
   }
-  validatePeaks(peaks);
-  const rounded: Peak[] = [];
-  for (let i = 0; i < peaks.length; i++) {
-    const [mz, intensity] = peaks[i] as Peak;
-    const mzOut = mzRounding === 'nominal' ? Math.round(mz) : mz;
-    if (mzOut <= 0) {
-      throw new ChemError('INVALID_PEAKS', `peaks[${i}].mz rounds to 0`, { field: `peaks[${i}].mz` });
-    }
-    if (intensity > 0) rounded.push([mzOut, intensity]);
-  }
-  if (rounded.length === 0) {
-    throw new ChemError('EMPTY_SPECTRUM', 'the spectrum has no peak with a positive intensity', { field: 'peaks' });
-  }
-  const merged = mergeDuplicateMz(rounded);
-  const base = basePeak(merged)[1];
-  const scaled: Peak[] = [];
-  for (const [mz, intensity] of merged) {
-    const relIntensity = Math.fround((intensity / base) * 100);
-    if (relIntensity > 0) scaled.push([mz, relIntensity]);
-  }
+  const { mz, relIntensity } = normalizedArrays(peaks, mzRounding);
+  const scaled: Peak[] = new Array<Peak>(mz.length);
+  for (let i = 0; i < mz.length; i++) scaled[i] = [mz[i] as number, relIntensity[i] as number];
   return noiseRelIntensity === 0 ? scaled : applyNoiseThreshold(scaled, noiseRelIntensity);
 }

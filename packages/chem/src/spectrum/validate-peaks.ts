@@ -35,7 +35,9 @@ export function validatePeaks(peaks: unknown, field = 'peaks'): PeakList {
         field: `${field}[${i}]`,
       });
     }
-    const [mz, intensity] = peak as unknown[];
+    // Index access, not destructuring: this runs for every peak of every library spectrum.
+    const mz: unknown = peak[0];
+    const intensity: unknown = peak[1];
     if (typeof mz !== 'number' || !Number.isFinite(mz) || mz <= 0 || mz > MAX_MZ) {
       throw new ChemError('INVALID_PEAKS', `${field}[${i}].mz must be a finite number in (0, ${MAX_MZ}]`, {
         field: `${field}[${i}].mz`,
