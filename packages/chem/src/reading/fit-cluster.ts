@@ -4,45 +4,80 @@ export interface NoiseModel {
   readonly absolute: number;
 }
 
-/** Result of fitting one theoretical pattern to the observed intensities from the candidate M up. */
+/**
+ * How many m/z below the candidate M the fit looks at: [M−H]+ and [M−2H]+ ions are common in EI
+ * (common practice) and their clusters overlap the molecular ion's, so the model adds the same
+ * cluster shifted by −1 and −2 with free non-negative scales.
+ */
+export const LEAD_DA = 2;
+
+/** Result of fitting one theoretical pattern to the observed intensities around a candidate M. */
 export interface PatternFit {
-  /** Weighted sum of squared residuals over every m/z from M to the end of the window. */
+  /** Weighted sum of squared residuals over every m/z from M−2 to the end of the window. */
   readonly chiSquare: number;
   /** Number of m/z positions compared. */
   readonly points: number;
-  /** Fitted intensity of pattern fraction 1, so that `scale × pattern[k]` models M+k. */
+  /** Fitted scale of the M cluster: `scale × pattern[k]` models the M ion's share of M+k. */
   readonly scale: number;
+  /** Fitted scales of the same cluster starting at M−1 and at M−2. */
+  readonly shiftedScales: readonly [minusOne: number, minusTwo: number];
 }
 
 function sigma(value: number, noise: NoiseModel): number {
   return noise.relative * value + noise.absolute;
 }
 
+/** Pattern value of component j (0: at M, 1: at M−1, 2: at M−2) at observed index k (index 0 ↔ M−2). */
+function component(pattern: Float64Array, j: number, k: number): number {
+  return pattern[k - LEAD_DA + j] ?? 0;
+}
+
 /**
- * Weighted least-squares scale of `pattern` to `observed` (both indexed from M), then χ².
- * Positions beyond the pattern count as predicted 0, so peaks the pattern cannot explain weigh in.
+ * Weighted non-negative least squares of the pattern at M, M−1 and M−2 to `observed` (index 0 ↔
+ * M−2), re-weighted with σ from the model, then χ². Positions beyond the pattern count as predicted
+ * 0, so peaks the pattern cannot explain weigh in.
  */
 export function fitPattern(observed: Float64Array, pattern: Float64Array, noise: NoiseModel): PatternFit {
   const points = observed.length;
-  let scale = (observed[0] ?? 0) / (pattern[0] || 1);
-  for (let iteration = 0; iteration < 3; iteration += 1) {
-    let numerator = 0;
-    let denominator = 0;
+  const coef = [(observed[LEAD_DA] ?? 0) / (pattern[0] || 1), 0, 0];
+  const model = (k: number): number => (coef[0] as number) * component(pattern, 0, k) + (coef[1] as number) * component(pattern, 1, k) + (coef[2] as number) * component(pattern, 2, k);
+  const weights = new Float64Array(points);
+  for (let round = 0; round < 3; round += 1) {
     for (let k = 0; k < points; k += 1) {
-      const p = pattern[k] ?? 0;
-      const o = observed[k] as number;
-      const s = sigma(Math.max(o, scale * p), noise);
-      numerator += (o * p) / (s * s);
-      denominator += (p * p) / (s * s);
+      const s = sigma(Math.max(observed[k] as number, model(k)), noise);
+      weights[k] = 1 / (s * s);
     }
-    scale = denominator > 0 ? numerator / denominator : 0;
+    for (let sweep = 0; sweep < 6; sweep += 1) {
+      for (let j = 0; j < 3; j += 1) {
+        let numerator = 0;
+        let denominator = 0;
+        for (let k = 0; k < points; k += 1) {
+          const p = component(pattern, j, k);
+          if (p === 0) continue;
+          const rest = model(k) - (coef[j] as number) * p;
+          numerator += (weights[k] as number) * ((observed[k] as number) - rest) * p;
+          denominator += (weights[k] as number) * p * p;
+        }
+        coef[j] = denominator > 0 ? Math.max(0, numerator / denominator) : 0;
+      }
+    }
   }
   let chiSquare = 0;
   for (let k = 0; k < points; k += 1) {
-    const model = scale * (pattern[k] ?? 0);
+    const m = model(k);
     const o = observed[k] as number;
-    const s = sigma(Math.max(o, model), noise);
-    chiSquare += ((o - model) / s) ** 2;
+    const s = sigma(Math.max(o, m), noise);
+    chiSquare += ((o - m) / s) ** 2;
   }
-  return { chiSquare, points, scale };
+  return { chiSquare, points, scale: (coef[0] as number), shiftedScales: [(coef[1] as number), (coef[2] as number)] };
+}
+
+/**
+ * Observed intensity at M+k less the fitted [M−H]+ and [M−2H]+ shares, so ratios such as M+1/M
+ * describe the molecular ion alone. Never below 0.
+ */
+export function moleculeShare(observed: Float64Array, pattern: Float64Array, fit: PatternFit, k: number): number {
+  const [minusOne, minusTwo] = fit.shiftedScales;
+  const raw = observed[LEAD_DA + k] ?? 0;
+  return Math.max(0, raw - minusOne * (pattern[k + 1] ?? 0) - minusTwo * (pattern[k + 2] ?? 0));
 }

@@ -69,7 +69,7 @@ describe('readMolecularIon', () => {
 
   it('acceptance (issue 3): on 400 simulated spectra, Cl/Br right ≥ 95 % and carbon range holds the truth ≥ 90 %', () => {
     // Simulation: 0–4 Cl, 0–3 Br, 0–2 S, C1–C30, N 0–2, O 0–3, 3 % relative + 0.03 % absolute noise,
-    // fragments below M; seeded, so the figures repeat run to run.
+    // [M−H]+ in a third of the spectra and other fragments below M; seeded, so the figures repeat run to run.
     const cases = simulateSpectra(20261202, 400);
     let halogensRight = 0;
     let carbonInRange = 0;

@@ -6,7 +6,7 @@ import type { PeakList } from '../types';
 import { carbonRange, type CarbonRange } from './carbon-range';
 import { clusterPattern, type HeteroatomHypothesis } from './cluster-model';
 import { acceptable, acceptableChiSquare, fitHypothesesAt, type HypothesisFit } from './fit-hypotheses';
-import type { NoiseModel } from './fit-cluster';
+import { LEAD_DA, moleculeShare, type NoiseModel } from './fit-cluster';
 
 /** What {@link readMolecularIon} concludes about the molecular ion, with every number behind it. */
 export interface MolecularIonReading {
@@ -15,7 +15,7 @@ export interface MolecularIonReading {
   /** Lowest m/z of the highest cluster that is not noise (M when M is present). */
   clusterStartMz: number;
   likelyAbsent: boolean;
-  /** The observed cluster from M up, most intense = 100. */
+  /** The observed cluster from M up (any fitted [M−H]+ / [M−2H]+ share removed), most intense = 100. */
   cluster: ClusterPeak[];
   chlorine: number;
   bromine: number;
@@ -75,7 +75,8 @@ function percent(value: number): string {
  * Method: every m/z within 14 Da below the highest significant peak is a candidate M; for each,
  * theoretical clusters (isotope table of SCIENCE.md §1) of C_n H_1.5n Cl_a Br_b S_c Si_d
  * (a ≤ 6, b ≤ 4, c ≤ 3, d ≤ 2; n near the M+1 estimate) are fitted by weighted least squares to the
- * observed intensities from M up, with σ = relativeNoise × intensity + absoluteNoise; χ² with a
+ * observed intensities from M−2 up (the same cluster at M−1 and M−2 with free scales stands for
+ * [M−H]+ and [M−2H]+ ions), with σ = relativeNoise × intensity + absoluteNoise; χ² with a
  * small prior cost per S/Si atom picks the hypothesis. M is the lowest candidate whose best fit is
  * acceptable (χ² ≤ dof + 4√(2·dof) + 4). M is likely absent when no candidate fits, or when a
  * peak at M−4 … M−12 (losses that rarely occur; common practice) is at least as intense as M.
@@ -114,13 +115,21 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
   const fitted = acceptable(best.fit);
   const m = best.m;
   const { h } = best;
-  const o = best.observed;
+  const model = clusterPattern(h, best.carbon);
+  // The molecular ion's own share from M up: the fitted [M−H]+ / [M−2H]+ clusters taken out.
+  const o = Float64Array.from({ length: best.observed.length - LEAD_DA }, (_, k) => moleculeShare(best.observed, model, best.fit, k));
   const evidence: { label: string; value: string }[] = [];
   const notes: string[] = [];
-  const model = clusterPattern(h, best.carbon);
 
   evidence.push({ label: 'Highest significant peak', value: `m/z ${top} (noise floor ${minRelIntensity} % of base peak)` });
   evidence.push({ label: 'Cluster starts at', value: `m/z ${m}, ${percent(o[0] as number)} of base peak` });
+  const [minusOne, minusTwo] = best.fit.shiftedScales;
+  if (minusOne + minusTwo > 0) {
+    evidence.push({
+      label: 'Overlapping [M−H]+ / [M−2H]+',
+      value: `same cluster fitted at m/z ${m - 1} (${percent(minusOne * (model[0] as number))}) and m/z ${m - 2} (${percent(minusTwo * (model[0] as number))}); ratios below are the molecular ion's share`,
+    });
+  }
   for (const k of [1, 2, 4, 6, 8]) {
     if (k >= o.length && (model[k] ?? 0) * best.fit.scale < 0.01) continue;
     const observedRatio = ((o[k] ?? 0) / (o[0] as number)) * 100;

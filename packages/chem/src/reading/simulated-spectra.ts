@@ -1,6 +1,6 @@
 // Simulated EI spectra with known answers, for tests only (invented data, no real spectrum):
 // molecular-ion cluster from isotopeCluster (SCIENCE.md §1 isotope table), fragments below M
-// (loss of CH3, Cl, Br and small alkyl ions), multiplicative and additive intensity noise.
+// ([M−H]+ in a third of them, loss of CH3, Cl, Br and small alkyl ions), multiplicative and additive intensity noise.
 import { gaussian, seededRandom } from '../isotopes/seeded-random';
 import { isotopeCluster } from '../isotopes/isotope-cluster';
 import { nominalMass } from '../formula/nominal-mass';
@@ -18,12 +18,14 @@ export interface SimulatedCase {
 
 /** Ranges of the simulation: 0–4 Cl, 0–3 Br, 0–2 S, C1–C30 (issue 3 acceptance), N 0–2, O 0–3. */
 export interface SimulationSettings {
+  /** Share of spectra that get an [M−H]+ cluster (5–40 % of the molecular-ion cluster). */
+  hydrogenLossShare: number;
   relativeNoise: number;
   absoluteNoise: number;
   detectionFloor: number;
 }
 
-export const DEFAULT_SIMULATION: SimulationSettings = { relativeNoise: 0.03, absoluteNoise: 0.03, detectionFloor: 0.05 };
+export const DEFAULT_SIMULATION: SimulationSettings = { hydrogenLossShare: 1 / 3, relativeNoise: 0.03, absoluteNoise: 0.03, detectionFloor: 0.05 };
 
 function integer(random: () => number, min: number, max: number): number {
   return min + Math.floor(random() * (max - min + 1));
@@ -54,7 +56,9 @@ export function simulateSpectra(seed: number, count: number, settings: Simulatio
     const molecule: ElementCounts = Object.fromEntries(Object.entries(counts).filter(([, n]) => n > 0));
     const M = nominalMass(molecule);
     const raw = new Map<number, number>();
-    addCluster(raw, molecule, 10 + random() * 90);
+    const clusterTop = 10 + random() * 90;
+    addCluster(raw, molecule, clusterTop);
+    if (H > 0 && random() < settings.hydrogenLossShare) addCluster(raw, { ...molecule, H: H - 1 }, clusterTop * (0.05 + random() * 0.35));
     const fragments: ElementCounts[] = [];
     if (C >= 2 && H >= 3) fragments.push({ ...molecule, C: C - 1, H: H - 3 });
     if (Cl > 0) fragments.push({ ...molecule, Cl: Cl - 1 });
