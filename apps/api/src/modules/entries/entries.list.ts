@@ -122,15 +122,20 @@ function pageSql(query: ListEntriesFilter, plan: ListPlan, cursor: Cursor | null
     const text = 'revision_search_text(r.name, r.synonyms)';
     where.push(`(${text} LIKE ${p(`%${likeEscape(lowered)}%`)} OR ${qParam} <% ${text})`);
   }
+  // Element counts come from the stored column `element_counts` (PostgreSQL fills it from the
+  // formula). Every element that must be present goes into one containment test, which the GIN
+  // index answers; ranges are then checked on those rows only.
   const f = query.formula;
+  const present = new Set<string>(query.elements ?? []);
   if (f?.kind === 'exact') where.push(`r.formula = ${p(f.formula)}`);
   if (f?.kind === 'ranges') {
     for (const range of f.ranges) {
-      const count = `formula_count(r.formula, ${p(range.symbol)})`;
+      if (range.min >= 1) present.add(range.symbol);
+      const count = `coalesce((r.element_counts ->> ${p(range.symbol)})::int, 0)`;
       where.push(range.max === null ? `${count} >= ${p(range.min)}` : `${count} BETWEEN ${p(range.min)} AND ${p(range.max)}`);
     }
   }
-  for (const symbol of query.elements ?? []) where.push(`formula_count(r.formula, ${p(symbol)}) > 0`);
+  if (present.size) where.push(`r.element_counts ?& ${p([...present])}::text[]`);
   if (query.minMass !== undefined) where.push(`r.nominal_mass >= ${p(query.minMass)}`);
   if (query.maxMass !== undefined) where.push(`r.nominal_mass <= ${p(query.maxMass)}`);
   if (query.hasRetentionIndex !== undefined) where.push(`r.retention_index IS ${query.hasRetentionIndex ? 'NOT ' : ''}NULL`);

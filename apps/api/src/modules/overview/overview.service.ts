@@ -50,7 +50,7 @@ export async function getOverview(ds: DataSource): Promise<Overview> {
          FROM revisions WHERE state = 'published' GROUP BY 1 ORDER BY 1`,
       [MASS_BIN_DA],
     );
-    const coverageSql = ELEMENT_SYMBOLS.map((s, i) => `count(*) FILTER (WHERE formula_count(formula, $${i + 1}) > 0)::int AS "${s}"`);
+    const coverageSql = ELEMENT_SYMBOLS.map((s, i) => `count(*) FILTER (WHERE element_counts ? $${i + 1})::int AS "${s}"`);
     const [coverage] = (await m.query(
       `SELECT count(*)::int AS total, ${coverageSql.join(', ')} FROM revisions WHERE state = 'published'`,
       [...ELEMENT_SYMBOLS],

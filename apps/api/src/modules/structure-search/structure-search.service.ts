@@ -17,20 +17,18 @@ export interface StructureHit {
 const BATCH = 500;
 
 /**
- * Computes the keys of published revisions that have a structure but no keys yet (or keys of
- * other content). Publishing does not call this (the review service is not ours to change), so
- * each search brings the table up to date first: after the first search it is a quick
- * anti-join that finds nothing. A structure openchemlib cannot read is stored with its error and
- * never matches.
+ * Computes the structure keys that publishing marked as pending (a trigger on revisions sets
+ * `pending` when a revision with a structure becomes published; the review service needs no
+ * change for it). Each search runs this first; with nothing pending it is one index probe. A
+ * structure openchemlib cannot read is stored with its error and never matches.
  */
 export async function refreshStructureKeys(ds: DataSource): Promise<number> {
   let done = 0;
   for (;;) {
     const rows: { id: string; structure: string; format: 'smiles' | 'molfile'; sha: string }[] = await ds.query(
       `SELECT r.id, r.structure, r.structure_format AS format, r.content_sha256 AS sha
-         FROM revisions r LEFT JOIN structure_keys sk ON sk.revision_id = r.id
-        WHERE r.state = 'published' AND r.structure IS NOT NULL AND r.structure_format IS NOT NULL
-          AND (sk.revision_id IS NULL OR sk.content_sha256 <> r.content_sha256)
+         FROM structure_keys sk JOIN revisions r ON r.id = sk.revision_id
+        WHERE sk.pending AND r.structure IS NOT NULL AND r.structure_format IS NOT NULL
         LIMIT ${BATCH}`,
     );
     if (rows.length === 0) return done;
@@ -53,7 +51,7 @@ export async function refreshStructureKeys(ds: DataSource): Promise<number> {
     await ds.query(
       `INSERT INTO structure_keys (revision_id, content_sha256, idcode, ss_index, error) VALUES ${tuples.join(', ')}
        ON CONFLICT (revision_id) DO UPDATE SET content_sha256 = EXCLUDED.content_sha256, idcode = EXCLUDED.idcode,
-         ss_index = EXCLUDED.ss_index, error = EXCLUDED.error, computed_at = now()`,
+         ss_index = EXCLUDED.ss_index, error = EXCLUDED.error, computed_at = now(), pending = false`,
       values,
     );
     done += rows.length;
