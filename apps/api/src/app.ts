@@ -26,17 +26,31 @@ import { uploadsRoutes } from './modules/uploads/uploads.routes';
 import { structuresRoutes } from './modules/structures/structures.routes';
 import { importsRoutes } from './modules/imports/imports.routes';
 import { adminRoutes } from './modules/admin/admin.routes';
+import { accessKeyAuth } from './modules/access-keys/access-key-auth';
+import { accessKeysRoutes } from './modules/access-keys/access-keys.routes';
+import { identifyRoutes } from './modules/identify/identify.routes';
+import { rateLimit } from './modules/identify/rate-limit';
+import { createSearchService, type SearchService } from './modules/identify/search-service';
+import { formulasRoutes } from './modules/formulas/formulas.routes';
 
 export interface AppDeps {
   env: Env;
   dataSource: DataSource;
   logger: Logger;
   sessionPool: pg.Pool;
+  /** The library index, its listener and batch runner; made here when not given (tests). main.ts starts it. */
+  search?: SearchService;
 }
 
+/** The search service of an app built by createApp (to start and stop it). */
+export const searchServiceOf = (app: Express): SearchService => app.locals.search as SearchService;
+
 /** Builds the Express app. It never listens: main.ts and the tests do that. */
-export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Express {
+export function createApp({ env, dataSource, logger, sessionPool, search: givenSearch }: AppDeps): Express {
   const app = express();
+  const search = givenSearch ?? createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger });
+  app.locals.search = search;
+  const identifyLimit = rateLimit({ perMinute: env.IDENTIFY_RATE_PER_MINUTE, burst: env.IDENTIFY_RATE_BURST });
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
 
@@ -99,6 +113,7 @@ export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Ex
   app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN }));
   app.use(
     '/api/v1',
+    accessKeyAuth(dataSource),
     csrfGuard,
     usersRoutes(dataSource),
     entriesRoutes(dataSource),
@@ -111,6 +126,9 @@ export function createApp({ env, dataSource, logger, sessionPool }: AppDeps): Ex
     structuresRoutes(),
     importsRoutes(dataSource, logger),
     adminRoutes(dataSource),
+    accessKeysRoutes(dataSource),
+    identifyRoutes(search, { limit: identifyLimit, maxBatchSpectra: env.IDENTIFY_BATCH_MAX_SPECTRA }),
+    formulasRoutes({ limit: identifyLimit }),
   );
   app.use(['/api', '/auth'], apiNotFound);
 

@@ -4,6 +4,7 @@ import { createLogger } from './shared/logger';
 import { createDataSource } from './db/data-source';
 import { createApp } from './app';
 import { createMailDispatcher } from './modules/mail/mail.service';
+import { createSearchService } from './modules/identify/search-service';
 
 const env = loadEnv();
 const logger = createLogger(env.LOG_LEVEL);
@@ -18,7 +19,10 @@ const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
 // When PostgreSQL restarts, idle clients die and the pool says so here before replacing them; an
 // 'error' event without a listener would end the process.
 sessionPool.on('error', (err) => logger.warn({ err }, 'session pool lost a connection; it reconnects on the next request'));
-const app = createApp({ env, dataSource, logger, sessionPool });
+const search = createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger });
+// The library index is loaded (and LISTEN in place) before the first request is accepted.
+await search.start();
+const app = createApp({ env, dataSource, logger, sessionPool, search });
 const mail = createMailDispatcher(
   dataSource,
   { host: env.SMTP_HOST, port: env.SMTP_PORT, secure: env.SMTP_SECURE, user: env.SMTP_USER, password: env.SMTP_PASSWORD, from: env.MAIL_FROM },
@@ -37,6 +41,7 @@ async function shutdown(signal: string) {
   logger.info({ signal }, 'shutting down');
   mail.stop();
   server.close();
+  await search.stop().catch(() => undefined);
   await sessionPool.end().catch(() => undefined);
   await dataSource.destroy().catch(() => undefined);
   process.exit(0);

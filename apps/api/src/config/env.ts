@@ -28,6 +28,11 @@ const EnvSchema = z
     FIRST_ADMIN_LOGIN: z.string().min(1).optional(),
     WEB_DIST: z.string().default('dist/web'),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    // Identify calls (single, batch submission, readings) per caller and minute, per API process.
+    IDENTIFY_RATE_PER_MINUTE: z.coerce.number().int().min(1).max(100000).default(120),
+    // Calls a caller may make at once after being idle (the bucket size); defaults to the rate.
+    IDENTIFY_RATE_BURST: z.coerce.number().int().min(1).max(100000).optional(),
+    IDENTIFY_BATCH_MAX_SPECTRA: z.coerce.number().int().min(1).max(100000).default(1000),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && env.SESSION_SECRET.startsWith('dev-only')) {
