@@ -11,6 +11,8 @@ export default defineConfig({
           root: './packages/chem',
           include: ['src/**/*.test.ts'],
           environment: 'node',
+          // Exhaustive agreement checks run thousands of searches; CI shares two cores with the rest.
+          testTimeout: 60000,
         },
       },
       {
