@@ -62,17 +62,20 @@ describe('the mail server is down when a curator decides', () => {
           { status: string; attempts: number }[]
         >;
 
+      // Other tests leave pending mails in the shared test database: put this one first in line so
+      // that each single-mail pass below handles exactly it.
+      await ctx.ds.query(`UPDATE mail_messages SET next_attempt_at = now() - interval '1 day' WHERE to_address = $1 AND subject = $2`, [to, subject]);
       // Nothing listens: the pass fails, the mail stays pending with one attempt counted.
-      await dispatcher.sendDue(100);
+      await dispatcher.sendDue(1);
       expect(await outbox()).toEqual([{ status: 'pending', attempts: 1 }]);
-      await dispatcher.sendDue(100);
+      await dispatcher.sendDue(1);
       // Still one attempt: the back-off holds it until next_attempt_at.
       expect(await outbox()).toEqual([{ status: 'pending', attempts: 1 }]);
 
       laterSmtp = await startFakeSmtp({ port: smtpPort });
       // The back-off after a first failure is 2 s; the test moves next_attempt_at to now instead of waiting.
-      await ctx.ds.query(`UPDATE mail_messages SET next_attempt_at = now() WHERE to_address = $1 AND status = 'pending'`, [to]);
-      await dispatcher.sendDue(100);
+      await ctx.ds.query(`UPDATE mail_messages SET next_attempt_at = now() - interval '1 day' WHERE to_address = $1 AND status = 'pending'`, [to]);
+      await dispatcher.sendDue(1);
       expect(await outbox()).toEqual([{ status: 'sent', attempts: 2 }]);
       expect(laterSmtp.messages.filter((m) => m.to.includes(to)).map((m) => m.subject)).toEqual([subject]);
     } finally {
