@@ -1,4 +1,3 @@
-import { ChemError, parsePeakList } from '@ionfolio/chem';
 import { AppError } from '../../shared/app-error';
 import { readSpectrumFile } from '../uploads/spectrum-file';
 
@@ -9,20 +8,20 @@ export interface UnknownSpectrum {
 
 /**
  * A CSV/TXT batch holds one spectrum per block; blocks are separated by blank lines, and a block may
- * start with `# name` (also a comment for the peak-list reader).
+ * start with `# name` (a comment for the peak-list reader). Each block is read as one uploaded table
+ * (name, binary and syntax checks of the upload reader), its errors prefixed with the block number.
  */
-function readTableBlocks(text: string): UnknownSpectrum[] {
-  const blocks = text.replace(/\r\n?/g, '\n').split(/\n\s*\n/).filter((b) => b.trim() !== '');
+function readTableBlocks(fileName: string, text: string): UnknownSpectrum[] {
+  const blocks = text.replace(/\r\n?/g, '\n').split(/\n[ \t]*\n/).filter((b) => b.trim() !== '');
+  if (blocks.length === 0) throw new AppError('UNREADABLE_FILE', 400, `${fileName}: the file holds no spectrum`);
   return blocks.map((block, i) => {
-    const title = /^\s*#\s*(.+)$/m.exec(block.split('\n').find((l) => l.trim() !== '') ?? '');
+    const title = /^\s*#\s*(.+)$/.exec(block.split('\n').find((l) => l.trim() !== '') ?? '');
     try {
-      const peaks = parsePeakList(block);
-      return { name: title?.[1]?.trim() ?? `block ${i + 1}`, peaks: peaks.map(([mz, y]) => [mz, y] as [number, number]) };
+      const [only] = readSpectrumFile(fileName, Buffer.from(block, 'utf8')).blocks;
+      return { name: title?.[1]?.trim() ?? `block ${i + 1}`, peaks: only!.peaks };
     } catch (err) {
-      if (err instanceof ChemError) {
-        throw new AppError('UNREADABLE_FILE', 400, `block ${i + 1}: ${err.message}`, {
-          details: [{ path: `file.block ${i + 1}${err.field ? `.${err.field}` : ''}`, message: err.message }],
-        });
+      if (err instanceof AppError && err.status === 400) {
+        throw new AppError(err.code, 400, `block ${i + 1}: ${err.message}`, { cause: err, details: err.details });
       }
       throw err;
     }
@@ -30,12 +29,13 @@ function readTableBlocks(text: string): UnknownSpectrum[] {
 }
 
 /**
- * The unknowns of an uploaded batch file: multi-block JCAMP-DX, or CSV/TSV/TXT with one spectrum per
- * block. The upload reader checks the name, refuses binary content and reads JCAMP-DX; a table is then
- * cut into its blocks here.
+ * The unknowns of an uploaded batch file: multi-block JCAMP-DX (read by the upload reader, which also
+ * checks the name and refuses binary content), or CSV/TSV/TXT with one spectrum per block.
  */
 export function readBatchFile(fileName: string, buf: Buffer): UnknownSpectrum[] {
-  const read = readSpectrumFile(fileName, buf);
-  if (read.format === 'jcamp') return read.blocks.map((b) => ({ name: b.title, peaks: b.peaks }));
-  return readTableBlocks(buf.toString('utf8'));
+  const head = buf.subarray(0, 4096).toString('utf8');
+  if (/^\s*##/m.test(head) || /\.(jdx|dx|jcamp|jcm)$/i.test(fileName)) {
+    return readSpectrumFile(fileName, buf).blocks.map((b) => ({ name: b.title, peaks: b.peaks }));
+  }
+  return readTableBlocks(fileName, buf.toString('utf8'));
 }

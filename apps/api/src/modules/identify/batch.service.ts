@@ -62,7 +62,8 @@ export function createBatchRunner(ds: DataSource, library: LibrarySearch, logger
   let chain: Promise<void> = Promise.resolve();
 
   async function run(id: string): Promise<void> {
-    const claimed: (JobRow & { spectra: UnknownSpectrum[] })[] = await ds.query(
+    // TypeORM answers an UPDATE … RETURNING with [rows, affected count].
+    const [claimed]: [(JobRow & { spectra: UnknownSpectrum[] })[], number] = await ds.query(
       `UPDATE identify_jobs SET status = 'running', updated_at = now()
        WHERE id = $1 AND (status = 'queued' OR (status = 'running' AND updated_at < now() - make_interval(secs => $2)))
        RETURNING ${JOB_COLUMNS}, spectra`,
