@@ -63,6 +63,11 @@ export const timelineItemSchema = z.object({
 
 export type TimelineItem = z.infer<typeof timelineItemSchema>;
 
+/** A frozen edition that holds one of the entry's revisions (newest first, as the API sends them). */
+export const entryEditionSchema = z.object({ label: z.string(), revision: z.number().int(), createdAt: z.string() });
+
+export type EntryEdition = z.infer<typeof entryEditionSchema>;
+
 export const entryViewSchema = z.object({
   accession: z.string(),
   createdAt: z.string(),
@@ -70,6 +75,7 @@ export const entryViewSchema = z.object({
   withdrawnReason: z.string().nullish(),
   revision: entryRevisionSchema,
   revisions: z.array(timelineItemSchema),
+  editions: z.array(entryEditionSchema),
 });
 
 export type EntryView = z.infer<typeof entryViewSchema>;

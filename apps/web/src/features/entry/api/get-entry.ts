@@ -16,11 +16,13 @@ export function entryViewQueryKey(accession: string, revision?: number) {
   return ['entries', accession, 'page', revision ?? 'current'] as const;
 }
 
-export function useEntryView(accession: string, revision: number | undefined) {
+/** `enabled: false` holds the request back, e.g. when the revision asked for is already on the page. */
+export function useEntryView(accession: string, revision: number | undefined, options: { enabled?: boolean } = {}) {
   return useQuery(
     queryOptions({
       queryKey: entryViewQueryKey(accession, revision),
       queryFn: ({ signal }) => getEntryView(accession, revision, signal),
+      enabled: options.enabled ?? true,
     }),
   );
 }

@@ -1,15 +1,22 @@
-import type { ReactNode } from 'react';
-import { PanelErrorBoundary } from '../../../components/errors/error-boundary';
+import { rdbe } from '@ionfolio/chem';
+import { Link } from 'react-router-dom';
 import { CheckList } from '../../../components/spectrum/check-list';
 import { PeakTable } from '../../../components/spectrum/peak-table';
 import { RevisionStateBadge } from '../../../components/spectrum/revision-state-badge';
 import { StickPlot } from '../../../components/spectrum/stick-plot';
+import { buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
+import { identifyHref } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date-time';
 import { hasRole, type Role } from '../../../lib/roles';
 import type { EntryView } from '../api/entry-view';
 import { EntryActions } from './entry-actions';
 import { EntryComments } from './entry-comments';
+import { EntryEditions } from './entry-editions';
+import { EntryFragmentNotes } from './entry-fragment-notes';
+import { Facts, Panel } from './entry-panel';
+import { MolecularIonCheck } from './molecular-ion-check';
+import { RevisionCompare } from './revision-compare';
 import { RevisionTimeline } from './revision-timeline';
 import { StructureDrawing } from './structure-drawing';
 
@@ -19,29 +26,15 @@ type EntryDetailsProps = {
   onDraftCreated: (revisionId: string) => void;
 };
 
-function Panel({ title, children, className = '' }: { title: string; children: ReactNode; className?: string }) {
-  return (
-    <section aria-label={title} className={`rounded-lg border border-rule-faint bg-paper-raised px-5 py-4 ${className}`}>
-      <h2 className="mb-3 text-lg font-bold">{title}</h2>
-      <PanelErrorBoundary title={title}>{children}</PanelErrorBoundary>
-    </section>
-  );
+function rdbeText(formula: string): string {
+  try {
+    return String(rdbe(formula));
+  } catch {
+    return '—';
+  }
 }
 
-function Facts({ rows }: { rows: [string, ReactNode][] }) {
-  return (
-    <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm leading-6">
-      {rows.map(([term, value]) => (
-        <div key={term} className="contents">
-          <dt className="text-ink-soft">{term}</dt>
-          <dd className="tabular-nums">{value}</dd>
-        </div>
-      ))}
-    </dl>
-  );
-}
-
-/** One entry at one revision: spectrum, peaks, compound, conditions, checks, timeline and comments. */
+/** One entry at one revision: spectrum, peaks, compound, evidence, conditions, checks, timeline, comparison, editions and comments. */
 export function EntryDetails({ entry, role, onDraftCreated }: EntryDetailsProps) {
   const r = entry.revision;
   const c = r.conditions;
@@ -62,7 +55,18 @@ export function EntryDetails({ entry, role, onDraftCreated }: EntryDetailsProps)
             {r.restoredFrom ? <span className="text-sm">restores r{r.restoredFrom}</span> : null}
           </span>
         }
-        actions={<EntryActions entry={entry} role={role} onDraftCreated={onDraftCreated} />}
+        actions={
+          <div className="grid justify-items-end gap-2">
+            <Link
+              className={buttonClasses('secondary')}
+              to={identifyHref({ from: entry.accession, exclude: entry.accession })}
+              title="Opens Identify with this entry's published spectrum, leaving the entry itself out of the candidates"
+            >
+              Search the library with this spectrum
+            </Link>
+            <EntryActions entry={entry} role={role} onDraftCreated={onDraftCreated} />
+          </div>
+        }
       />
       {entry.withdrawnAt ? (
         <div role="note" aria-label="Withdrawn" className="rounded-lg border border-copper bg-copper-soft px-5 py-3">
@@ -95,6 +99,7 @@ export function EntryDetails({ entry, role, onDraftCreated }: EntryDetailsProps)
               ['Formula', <span className="font-mono">{r.formula}</span>],
               ['Nominal mass', `${r.nominalMass} Da`],
               ['Monoisotopic mass', `${r.monoisotopicMass.toFixed(4)} Da`],
+              ['RDBE', rdbeText(r.formula)],
               ['CAS RN', r.casRn ?? '—'],
               ['Synonyms', r.synonyms.length > 0 ? r.synonyms.join('; ') : '—'],
             ]}
@@ -118,6 +123,12 @@ export function EntryDetails({ entry, role, onDraftCreated }: EntryDetailsProps)
             ]}
           />
         </Panel>
+        <Panel title="Molecular-ion check">
+          <MolecularIonCheck peaks={r.peaks} formula={r.formula} nominalMassDa={r.nominalMass} />
+        </Panel>
+        <Panel title="Fragment notes">
+          <EntryFragmentNotes peaks={r.peaks} formula={r.formula} molecularIonMz={r.nominalMass} />
+        </Panel>
         <Panel title="Sample and change notes">
           <p className="text-sm font-bold text-ink-soft">Sample notes</p>
           <p className="whitespace-pre-wrap leading-relaxed">{r.sampleNotes || '—'}</p>
@@ -138,10 +149,19 @@ export function EntryDetails({ entry, role, onDraftCreated }: EntryDetailsProps)
         <Panel title="Revisions">
           <RevisionTimeline accession={entry.accession} items={entry.revisions} shownNumber={r.number} />
         </Panel>
-        <Panel title={`Comments on r${r.number}`}>
-          <EntryComments revisionId={r.id} />
-        </Panel>
+        <div className="grid content-start gap-6">
+          <Panel title="Editions">
+            <EntryEditions editions={entry.editions} shownNumber={r.number} />
+          </Panel>
+          <Panel title={`Comments on r${r.number}`}>
+            <EntryComments revisionId={r.id} />
+          </Panel>
+        </div>
       </div>
+
+      <Panel title="Compare revisions">
+        <RevisionCompare entry={entry} />
+      </Panel>
     </article>
   );
 }
