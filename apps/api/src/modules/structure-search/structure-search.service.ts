@@ -65,7 +65,8 @@ const HIT_COLUMNS = `e.accession, r.number AS revision, r.name, r.formula, r.nom
 
 /**
  * Published entries whose structure contains the fragment (substructure) or is the same molecule
- * (exact: equal openchemlib idcodes), in accession order, at most `limit`.
+ * (exact: equal openchemlib idcodes), in accession order, at most `limit` (`truncated` says when
+ * more would match).
  *
  * Substructure search screens in PostgreSQL first — a revision can only contain the fragment when
  * every bit of the fragment's index is set in its own (`ss_index & f = f`) — and runs
@@ -95,24 +96,35 @@ export async function searchStructures(ds: DataSource, request: StructureSearchR
     return answer(rows.slice(0, request.limit), rows.length, rows.length > request.limit, started, request);
   }
 
-  const hits: CandidateRow[] = [];
+  // Candidates are read in structure_keys primary-key order, so each batch is a short walk of that
+  // index that stops at the batch size (ordering by accession would sort every candidate first);
+  // the hits are put in accession order at the end.
+  const hits: (CandidateRow & { revisionId: string })[] = [];
   let screened = 0;
-  let after = '';
+  let after = '00000000-0000-0000-0000-000000000000';
+  let truncated = false;
   for (;;) {
-    const rows: CandidateRow[] = await ds.query(
-      `SELECT ${HIT_COLUMNS} ${from}
-        WHERE sk.idcode IS NOT NULL AND (sk.ss_index & $1::bit(512)) = $1::bit(512) AND e.accession > $2
-        ORDER BY e.accession LIMIT ${BATCH}`,
+    const rows: (CandidateRow & { revisionId: string })[] = await ds.query(
+      `SELECT ${HIT_COLUMNS}, sk.revision_id AS "revisionId" ${from}
+        WHERE sk.idcode IS NOT NULL AND (sk.ss_index & $1::bit(512)) = $1::bit(512) AND sk.revision_id > $2::uuid
+        ORDER BY sk.revision_id LIMIT ${BATCH}`,
       [query.indexBits, after],
     );
     for (const row of rows) {
       screened += 1;
       if (containsFragment(query.fragment, query.index, row.idcode, row.bits)) hits.push(row);
-      if (hits.length > request.limit) return answer(hits.slice(0, request.limit), screened, true, started, request);
+      if (hits.length > request.limit) break;
     }
-    if (rows.length < BATCH) return answer(hits, screened, false, started, request);
-    after = rows.at(-1)!.accession;
+    if (hits.length > request.limit) {
+      truncated = true;
+      break;
+    }
+    if (rows.length < BATCH) break;
+    after = rows.at(-1)!.revisionId;
   }
+  const page = hits.slice(0, request.limit).map(({ revisionId: _r, ...hit }) => hit);
+  page.sort((a, b) => (a.accession < b.accession ? -1 : 1));
+  return answer(page, screened, truncated, started, request);
 }
 
 function answer(rows: CandidateRow[], screened: number, truncated: boolean, started: number, request: StructureSearchRequest) {

@@ -133,7 +133,7 @@ export function LibraryTable({ rows, sort, onSort, onNearEnd, footer }: LibraryT
   const rowId = (index: number) => `${idPrefix}-row-${index}`;
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule-faint bg-paper-raised">
+    <div className="overflow-x-auto rounded-lg border border-rule-faint bg-paper-raised has-[[role=grid]:focus-visible]:border-focus has-[[role=grid]:focus-visible]:ring-1 has-[[role=grid]:focus-visible]:ring-focus">
       <div
         role="grid"
         aria-label="Library entries"
@@ -142,10 +142,13 @@ export function LibraryTable({ rows, sort, onSort, onNearEnd, footer }: LibraryT
         aria-activedescendant={active >= 0 ? rowId(active) : undefined}
         tabIndex={0}
         onKeyDown={onKeyDown}
-        onFocus={() => {
-          if (active < 0 && rows.length > 0) setActive(0);
+        onFocus={(event) => {
+          // Start from the first row in view, not from the top of a list scrolled far down.
+          if (event.target === event.currentTarget && active < 0 && rows.length > 0) {
+            setActive(Math.min(rows.length - 1, Math.ceil((scrollRef.current?.scrollTop ?? 0) / ROW_HEIGHT_PX)));
+          }
         }}
-        className="text-sm focus-visible:outline-2 focus-visible:outline-offset-[-2px] focus-visible:outline-focus"
+        className="text-sm focus-visible:outline-none"
         style={{ minWidth: MIN_WIDTH }}
       >
         <div role="row" aria-rowindex={1} className="grid border-b border-rule bg-paper-sunk" style={GRID}>

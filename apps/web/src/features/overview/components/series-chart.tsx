@@ -31,7 +31,10 @@ export function SeriesChart({ categories, series, yName, rightYName, heightPx, h
   const option = useMemo(() => {
     const text = { color: colors.inkSoft, fontFamily: 'Lato, system-ui, sans-serif' };
     const axisLine = { lineStyle: { color: colors.rule } };
-    const categoryAxis = { type: 'category' as const, data: [...categories], axisLine, axisTick: { lineStyle: { color: colors.rule } }, axisLabel: text };
+    const categoryAxis = { type: 'category' as const, data: [...categories], axisLine, axisTick: { lineStyle: { color: colors.rule } },
+      // Every label when there are few categories (states, elements, checks); ECharts thins long series.
+      axisLabel: { ...text, interval: categories.length <= 12 ? 0 : ('auto' as const), fontSize: 11 },
+    };
     const valueAxis = (name: string) => ({
       type: 'value' as const,
       name,
