@@ -28,7 +28,9 @@ const DATABASE_DOWN_MESSAGES =
 /** True when `err` (or what it wraps: TypeORM's driverError, a cause, an AggregateError's errors) says the database is unreachable. */
 export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
   if (err === null || typeof err !== 'object' || depth > 4) return false;
-  const e = err as { code?: unknown; message?: unknown; driverError?: unknown; cause?: unknown; errors?: unknown };
+  const e = err as { name?: unknown; code?: unknown; message?: unknown; driverError?: unknown; cause?: unknown; errors?: unknown };
+  // TypeORM releases a transaction's query runner when its connection dies; the transaction's next query then throws this.
+  if (e.name === 'QueryRunnerAlreadyReleasedError') return true;
   if (typeof e.code === 'string' && (DATABASE_DOWN_CODES.has(e.code) || SOCKET_DOWN_CODES.has(e.code))) return true;
   if (typeof e.message === 'string' && DATABASE_DOWN_MESSAGES.test(e.message)) return true;
   const inner = [e.driverError, e.cause, ...(Array.isArray(e.errors) ? e.errors : [])];

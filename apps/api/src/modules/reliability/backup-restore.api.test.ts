@@ -96,7 +96,7 @@ describe('npm run db:backup and db:restore', () => {
     await withDataSource(db.url, async (ds) => {
       await expect(ds.query(`DELETE FROM audit_events`)).rejects.toThrow(/append-only/);
     });
-  });
+  }, 60_000);
 
   it('db:restore refuses to run without a file, or with a file that is not a backup', async () => {
     const none = await runScript('db-restore.sh', [], { DATABASE_URL: db.url });
