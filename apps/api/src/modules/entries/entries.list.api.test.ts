@@ -7,6 +7,9 @@ import { libraryContent, uniqueTag } from './list-test-rows';
 let ctx: TestContext;
 let reader: TestAgent;
 let authorLogin: string;
+let authorAgent: TestAgent;
+let curatorAgent: TestAgent;
+const W = { 'X-Requested-With': 'ionfolio' };
 const tag = uniqueTag();
 const made: Record<string, string> = {};
 
@@ -24,6 +27,8 @@ beforeAll(async () => {
   const author = await signInAs(ctx, 'contributor');
   authorLogin = author.login;
   const curator = await signInAs(ctx, 'curator');
+  authorAgent = author.agent;
+  curatorAgent = curator.agent;
   reader = (await signInAs(ctx, 'reader')).agent;
   for (const row of ROWS) {
     const content = libraryContent(row.name, row.formula, row.massDa, row.smiles, {
@@ -126,5 +131,26 @@ describe('GET /entries.csv', () => {
     const res = await reader.get('/api/v1/entries.csv').query({ q: tag, elements: 'Cl', formula: 'Cl2-' }).expect(200);
     const rows = res.text.trim().split('\r\n').slice(1).map((l) => l.split(',')[0]);
     expect(rows.sort()).toEqual([`"${made.di}"`, `"${made.tri}"`].sort());
+  });
+});
+
+// Last in the file: it withdraws one of the rows above.
+describe('GET /entries status and edition', () => {
+  it('a withdrawn entry leaves the default list and shows under withdrawn and any; an edition lists its own members', async () => {
+    const label = `lib-${tag}`;
+    await curatorAgent.post('/api/v1/editions').set(W).send({ label, notes: 'library list test' }).expect(201);
+    const late = await publishEntry(authorAgent, curatorAgent, libraryContent(`Late toluene ${tag}`, 'C7H8', 92, 'Cc1ccccc1'));
+    await curatorAgent.post(`/api/v1/entries/${made.tri}/withdraw`).set(W).send({ reason: 'Test: retired from the list test' }).expect(200);
+
+    const published = accessions((await list({ q: tag, limit: 500 }).expect(200)).body);
+    expect(published).not.toContain(made.tri);
+    expect(published).toContain(late.accession);
+    const withdrawn = await list({ q: tag, status: 'withdrawn' }).expect(200);
+    expect(accessions(withdrawn.body)).toEqual([made.tri]);
+    expect(withdrawn.body.entries[0].state).toBe('withdrawn');
+    const any = accessions((await list({ q: tag, status: 'any', limit: 500 }).expect(200)).body);
+    expect(any.sort()).toEqual([...Object.values(made), late.accession].sort());
+    const edition = accessions((await list({ q: tag, edition: label, limit: 500 }).expect(200)).body);
+    expect(edition.sort()).toEqual(Object.values(made).sort());
   });
 });
