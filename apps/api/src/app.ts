@@ -32,6 +32,7 @@ import { identifyRoutes } from './modules/identify/identify.routes';
 import { rateLimit } from './modules/identify/rate-limit';
 import { createSearchService, type SearchService } from './modules/identify/search-service';
 import { formulasRoutes } from './modules/formulas/formulas.routes';
+import { openapiRoutes } from './modules/openapi/openapi.routes';
 
 export interface AppDeps {
   env: Env;
@@ -113,6 +114,7 @@ export function createApp({ env, dataSource, logger, sessionPool, search: givenS
   app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN }));
   app.use(
     '/api/v1',
+    openapiRoutes(),
     accessKeyAuth(dataSource),
     csrfGuard,
     usersRoutes(dataSource),

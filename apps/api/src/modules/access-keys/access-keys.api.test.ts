@@ -3,6 +3,7 @@ import request from 'supertest';
 import { searchServiceOf } from '../../app';
 import { createTestContext, signInAs, type TestContext } from '../../testing/test-app';
 import { W } from '../identify/identify-test-helpers';
+import { chlorobenzeneContent } from '../../testing/fixtures';
 
 let ctx: TestContext;
 beforeAll(async () => {
@@ -88,6 +89,23 @@ describe('access keys', () => {
     expect(all).toEqual(expect.arrayContaining([ka.key.id, kb.key.id]));
     await a.agent.delete(`/api/v1/access-keys/${kb.key.id}`).set(W).expect(404);
     await admin.agent.delete(`/api/v1/access-keys/${kb.key.id}`).set(W).expect(200);
+  });
+
+  it('a library:read key reads entries; a submit key creates and submits a draft without a CSRF header', async () => {
+    const contributor = await signInAs(ctx, 'contributor');
+    const read = await newKey(contributor.agent, ['library:read']);
+    const submit = await newKey(contributor.agent, ['submit']);
+    const tool = request(ctx.app);
+    await tool.get('/api/v1/entries').set('Authorization', `Bearer ${read.secret}`).expect(200);
+    await tool.get('/api/v1/entries').set('Authorization', `Bearer ${submit.secret}`).expect(403);
+    const created = await tool.post('/api/v1/entries').set('Authorization', `Bearer ${submit.secret}`).send(chlorobenzeneContent()).expect(201);
+    const r1 = created.body.revision;
+    await tool.post(`/api/v1/revisions/${r1.id}/submit`).set('Authorization', `Bearer ${submit.secret}`).send({ lockVersion: r1.lockVersion }).expect(200);
+    await tool.post('/api/v1/entries').set('Authorization', `Bearer ${read.secret}`).send(chlorobenzeneContent()).expect(403);
+    // A key acts as its owner: when the owner is a reader again, submit is refused by role.
+    await ctx.ds.query(`UPDATE users SET role = 'reader' WHERE id = $1`, [contributor.id]);
+    const demoted = await tool.post('/api/v1/entries').set('Authorization', `Bearer ${submit.secret}`).send(chlorobenzeneContent()).expect(403);
+    expect(demoted.body.error.code).toBe('FORBIDDEN');
   });
 
   it('the rate limit counts per key: over it 429 with Retry-After', async () => {
