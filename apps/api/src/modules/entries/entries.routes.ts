@@ -27,28 +27,28 @@ import { revisionToJcampInput } from './revision-jcamp';
 export function entriesRoutes(ds: DataSource): Router {
   const r = Router();
 
-  r.get('/entries', requireRole('reader'), async (req, res) => {
+  r.get('/entries', requireRole('reader', { scope: 'library:read' }), async (req, res) => {
     res.json(await listEntries(ds, ListEntriesQuery.parse(req.query)));
   });
 
-  r.post('/entries', requireRole('contributor'), async (req, res) => {
+  r.post('/entries', requireRole('contributor', { scope: 'submit' }), async (req, res) => {
     const content = RevisionContentSchema.parse(req.body);
     res.status(201).json({ revision: await createEntry(ds, req.user!, content) });
   });
 
-  r.get('/entries/:accession', requireRole('reader'), async (req, res) => {
+  r.get('/entries/:accession', requireRole('reader', { scope: 'library:read' }), async (req, res) => {
     const { accession } = AccessionParams.parse(req.params);
     const { revision } = RevisionQuery.parse(req.query);
     res.json({ entry: await getEntry(ds, req.user!, accession, revision) });
   });
 
-  r.get('/entries/:accession/revisions', requireRole('reader'), async (req, res) => {
+  r.get('/entries/:accession/revisions', requireRole('reader', { scope: 'library:read' }), async (req, res) => {
     const { accession } = AccessionParams.parse(req.params);
     const entry = await getEntry(ds, req.user!, accession);
     res.json({ accession, revisions: entry.revisions });
   });
 
-  r.get('/entries/:accession/jcamp', requireRole('reader'), async (req, res) => {
+  r.get('/entries/:accession/jcamp', requireRole('reader', { scope: 'library:read' }), async (req, res) => {
     const { accession } = AccessionParams.parse(req.params);
     const { revision } = RevisionQuery.parse(req.query);
     const entry = await getEntry(ds, req.user!, accession, revision);
@@ -74,18 +74,18 @@ export function entriesRoutes(ds: DataSource): Router {
     res.json({ entry: await withdrawEntry(ds, req.user!, accession, reason) });
   });
 
-  r.get('/revisions/:id', requireRole('reader'), async (req, res) => {
+  r.get('/revisions/:id', requireRole('reader', { scope: 'library:read' }), async (req, res) => {
     const { id } = RevisionIdParams.parse(req.params);
     res.json({ revision: await getRevisionById(ds, req.user!, id) });
   });
 
-  r.patch('/revisions/:id', requireRole('contributor'), async (req, res) => {
+  r.patch('/revisions/:id', requireRole('contributor', { scope: 'submit' }), async (req, res) => {
     const { id } = RevisionIdParams.parse(req.params);
     const patch = RevisionPatchSchema.parse(req.body);
     res.json({ revision: await updateRevision(ds, req.user!, id, patch) });
   });
 
-  r.post('/revisions/:id/submit', requireRole('contributor'), async (req, res) => {
+  r.post('/revisions/:id/submit', requireRole('contributor', { scope: 'submit' }), async (req, res) => {
     const { id } = RevisionIdParams.parse(req.params);
     const { lockVersion } = LockVersionBody.parse(req.body);
     res.json({ revision: await submitRevision(ds, req.user!, id, lockVersion) });
