@@ -42,9 +42,15 @@ export function fragmentOf(smiles: string): { fragment: Molecule; index: number[
   return { fragment, index, indexBits: indexToBits(index) };
 }
 
-/** True when `fragment` occurs in the molecule stored as `idcode` (openchemlib's exact atom-by-atom test). */
-export function containsFragment(fragment: Molecule, fragmentIndex: number[], idcode: string, indexBits: string): boolean {
-  searcher.setFragment(fragment, fragmentIndex);
-  searcher.setMolecule(Molecule.fromIDCode(idcode), bitsToIndex(indexBits));
-  return searcher.isFragmentInMolecule();
+/**
+ * A test "does the fragment occur in the molecule stored as this idcode and index?" (openchemlib's
+ * atom-by-atom match). The fragment is set once; each call only sets the molecule.
+ */
+export function fragmentMatcher(fragment: Molecule, fragmentIndex: number[]): (idcode: string, indexBits: string) => boolean {
+  const matcher = new SSSearcherWithIndex();
+  matcher.setFragment(fragment, fragmentIndex);
+  return (idcode, indexBits) => {
+    matcher.setMolecule(Molecule.fromIDCode(idcode), bitsToIndex(indexBits));
+    return matcher.isFragmentInMolecule();
+  };
 }

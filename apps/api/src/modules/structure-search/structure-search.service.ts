@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { Molecule } from 'openchemlib';
 import { AppError } from '../../shared/app-error';
 import type { StructureSearchRequest } from './structure-search.schemas';
-import { containsFragment, fragmentOf, readStructure, structureKeys } from './structure-keys';
+import { fragmentMatcher, fragmentOf, readStructure, structureKeys } from './structure-keys';
 
 export interface StructureHit {
   accession: string;
@@ -96,31 +96,41 @@ export async function searchStructures(ds: DataSource, request: StructureSearchR
     return answer(rows.slice(0, request.limit), rows.length, rows.length > request.limit, started, request);
   }
 
-  // Candidates are read in structure_keys primary-key order, so each batch is a short walk of that
-  // index that stops at the batch size (ordering by accession would sort every candidate first);
-  // the hits are put in accession order at the end.
+  // Candidates are read in structure_keys primary-key order, a batch at a time: the inner query
+  // walks that index and stops at the batch size (the planner cannot estimate the bit test, and
+  // ordering the joined rows by accession would sort every candidate first). Keys of revisions no
+  // longer published are skipped here; the hits are put in accession order at the end.
+  const matches = fragmentMatcher(query.fragment, query.index);
   const hits: (CandidateRow & { revisionId: string })[] = [];
   let screened = 0;
   let after = '00000000-0000-0000-0000-000000000000';
   let truncated = false;
   for (;;) {
-    const rows: (CandidateRow & { revisionId: string })[] = await ds.query(
-      `SELECT ${HIT_COLUMNS}, sk.revision_id AS "revisionId" ${from}
-        WHERE sk.idcode IS NOT NULL AND (sk.ss_index & $1::bit(512)) = $1::bit(512) AND sk.revision_id > $2::uuid
-        ORDER BY sk.revision_id LIMIT ${BATCH}`,
+    const batch: (CandidateRow & { revisionId: string; live: boolean })[] = await ds.query(
+      `WITH batch AS (
+         SELECT revision_id, content_sha256, idcode, ss_index FROM structure_keys
+          WHERE idcode IS NOT NULL AND revision_id > $2::uuid AND (ss_index & $1::bit(512)) = $1::bit(512)
+          ORDER BY revision_id LIMIT ${BATCH}
+       )
+       SELECT e.accession, r.number AS revision, r.name, r.formula, r.nominal_mass AS "nominalMass", r.structure, r.simulated,
+              sk.idcode, sk.ss_index::text AS bits, sk.revision_id AS "revisionId",
+              (r.state = 'published' AND r.content_sha256 = sk.content_sha256) AS live
+         FROM batch sk JOIN revisions r ON r.id = sk.revision_id JOIN entries e ON e.id = r.entry_id
+        ORDER BY sk.revision_id`,
       [query.indexBits, after],
     );
+    const rows = batch.filter((row) => row.live).map(({ live: _l, ...row }) => row);
     for (const row of rows) {
       screened += 1;
-      if (containsFragment(query.fragment, query.index, row.idcode, row.bits)) hits.push(row);
+      if (matches(row.idcode, row.bits)) hits.push(row);
       if (hits.length > request.limit) break;
     }
     if (hits.length > request.limit) {
       truncated = true;
       break;
     }
-    if (rows.length < BATCH) break;
-    after = rows.at(-1)!.revisionId;
+    if (batch.length < BATCH) break;
+    after = batch.at(-1)!.revisionId;
   }
   const page = hits.slice(0, request.limit).map(({ revisionId: _r, ...hit }) => hit);
   page.sort((a, b) => (a.accession < b.accession ? -1 : 1));
