@@ -38,6 +38,7 @@ function singleEntry(shown: ReturnType<typeof revision>, extra: Record<string, u
   });
 }
 
+// First finds wait up to 5 s: the lazily loaded route takes longer than the 1 s default on a busy machine.
 describe('entry page evidence', () => {
   it('when the spectrum has a one-chlorine cluster, the molecular-ion check reads M 112 with Cl 1 and overlays the C6H5Cl cluster', async () => {
     installFakeFetch(singleEntry(chlorobenzene()));
@@ -109,7 +110,7 @@ describe('entry page evidence', () => {
     );
     renderApp('/entries/IF-000012?revision=2');
 
-    const diff = await screen.findByTestId('revision-diff');
+    const diff = await screen.findByTestId('revision-diff', {}, { timeout: 5000 });
     expect(network.made('GET', '/api/v1/entries/IF-000012').map((r) => r.url.searchParams.get('revision'))).toEqual(['2', '1']);
     expect((screen.getByLabelText('Compare') as HTMLSelectElement).value).toBe('1');
     expect((screen.getByLabelText('with') as HTMLSelectElement).value).toBe('2');
@@ -140,7 +141,7 @@ describe('entry page evidence', () => {
     );
     const { router } = renderApp('/entries/IF-000012');
 
-    await screen.findByTestId('revision-diff');
+    await screen.findByTestId('revision-diff', {}, { timeout: 5000 });
     fireEvent.change(screen.getByLabelText('Compare'), { target: { value: '1' } });
 
     await waitFor(() => expect(router.state.location.search).toBe('?compare=1&to=3'));
@@ -151,7 +152,7 @@ describe('entry page evidence', () => {
   it('when the entry has one revision, says there is nothing to compare', async () => {
     installFakeFetch(singleEntry(chlorobenzene()));
     renderApp('/entries/IF-000012');
-    expect(await screen.findByText('This entry has one revision so far: there is nothing to compare it with.')).toBeTruthy();
+    expect(await screen.findByText('This entry has one revision so far: there is nothing to compare it with.', {}, { timeout: 5000 })).toBeTruthy();
   });
 
   it('lists the editions that hold the entry with links, and offers a library search with this spectrum', async () => {
@@ -168,7 +169,7 @@ describe('entry page evidence', () => {
     );
     renderApp('/entries/IF-000012');
 
-    const list = await screen.findByRole('list', { name: 'Editions that contain this entry' });
+    const list = await screen.findByRole('list', { name: 'Editions that contain this entry' }, { timeout: 5000 });
     const items = within(list).getAllByRole('listitem');
     expect(items.map((li) => within(li).getByRole('link').getAttribute('href'))).toEqual(['/editions/2026.06', '/editions/2026.02']);
     expect(items[1]?.textContent).toContain('r2');
@@ -178,6 +179,17 @@ describe('entry page evidence', () => {
   it('when no edition holds the entry yet, says so', async () => {
     installFakeFetch(routes('reader'));
     renderApp('/entries/IF-000012');
-    expect(await screen.findByText('No frozen edition holds this entry yet.')).toBeTruthy();
+    expect(await screen.findByText('No frozen edition holds this entry yet.', {}, { timeout: 5000 })).toBeTruthy();
+  });
+
+  it('when the server sends no editions field, the page still opens and says the editions are not listed', async () => {
+    installFakeFetch(
+      routes('reader', {
+        'GET /api/v1/entries/IF-000012': (request: RecordedRequest) => entryReply(request, { editions: undefined }),
+      }),
+    );
+    renderApp('/entries/IF-000012');
+    expect(await screen.findByText('This server does not list the editions of an entry.', {}, { timeout: 5000 })).toBeTruthy();
+    expect(screen.getByRole('heading', { level: 1, name: '4-Chloroanisole' })).toBeTruthy();
   });
 });

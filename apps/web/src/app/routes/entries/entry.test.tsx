@@ -5,12 +5,13 @@ import { apiError, installFakeFetch, json, type RecordedRequest } from '../../..
 import { renderApp } from '../../../testing/render-app';
 import { entryReply, revision, routes } from './entry-fixtures';
 
+// First finds wait up to 5 s: the lazily loaded route takes longer than the 1 s default on a busy machine.
 describe('entry page', () => {
   it('when a reader opens an entry, shows the simulated marker, the timeline with the current revision marked, and no actions', async () => {
     const network = installFakeFetch(routes('reader'));
     renderApp('/entries/IF-000012');
 
-    expect(await screen.findByRole('heading', { level: 1, name: '4-Chloroanisole' })).toBeTruthy();
+    expect(await screen.findByRole('heading', { level: 1, name: '4-Chloroanisole' }, { timeout: 5000 })).toBeTruthy();
     expect(screen.getByTestId('simulated-marker').textContent).toBe('simulated — demo only');
     const timeline = screen.getByRole('list', { name: 'Revision timeline' });
     const items = within(timeline).getAllByRole('listitem');
@@ -36,7 +37,7 @@ describe('entry page', () => {
     const network = installFakeFetch(routes('reader'));
     renderApp('/entries/IF-000012?revision=1');
 
-    expect(await screen.findByText('IF-000012 r1', { selector: 'span' })).toBeTruthy();
+    expect(await screen.findByText('IF-000012 r1', { selector: 'span' }, { timeout: 5000 })).toBeTruthy();
     expect(network.made('GET', '/api/v1/entries/IF-000012')[0]?.url.searchParams.get('revision')).toBe('1');
     const items = within(screen.getByRole('list', { name: 'Revision timeline' })).getAllByRole('listitem');
     expect(items[2]?.getAttribute('aria-current')).toBe('true');
@@ -57,7 +58,7 @@ describe('entry page', () => {
     );
     const { router } = renderApp('/entries/IF-000012?revision=1');
 
-    fireEvent.click(await screen.findByRole('button', { name: "Restore this revision's content" }));
+    fireEvent.click(await screen.findByRole('button', { name: "Restore this revision's content" }, { timeout: 5000 }));
 
     await waitFor(() => expect(router.state.location.pathname).toBe(`/submit/${draftId}`));
     expect(network.made('POST', '/api/v1/entries/IF-000012/revisions')[0]?.body).toEqual({
@@ -80,7 +81,7 @@ describe('entry page', () => {
     );
     renderApp('/entries/IF-000012');
 
-    fireEvent.click(await screen.findByRole('button', { name: 'Withdraw entry' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Withdraw entry' }, { timeout: 5000 }));
     const dialog = screen.getByRole('dialog', { name: 'Withdraw entry' });
     fireEvent.click(within(dialog).getByRole('button', { name: 'Withdraw' }));
     expect(within(dialog).getByRole('alert').textContent).toBe('give a reason');
@@ -103,7 +104,7 @@ describe('entry page', () => {
     );
     renderApp('/entries/IF-000012');
 
-    fireEvent.click(await screen.findByRole('button', { name: 'Start a new revision' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Start a new revision' }, { timeout: 5000 }));
 
     expect((await screen.findByRole('alert')).textContent).toBe('IF-000012 r4 is already open; finish it first.');
     expect(screen.queryByRole('button', { name: 'Withdraw entry' })).toBeNull();
@@ -118,6 +119,6 @@ describe('entry page', () => {
       'GET /api/v1/entries/IF-000999': apiError(404, 'NOT_FOUND', 'No entry IF-000999'),
     });
     renderApp('/entries/IF-000999');
-    expect(await screen.findByText('There is no page at this address')).toBeTruthy();
+    expect(await screen.findByText('There is no page at this address', {}, { timeout: 5000 })).toBeTruthy();
   });
 });

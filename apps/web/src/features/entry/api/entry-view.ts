@@ -75,7 +75,8 @@ export const entryViewSchema = z.object({
   withdrawnReason: z.string().nullish(),
   revision: entryRevisionSchema,
   revisions: z.array(timelineItemSchema),
-  editions: z.array(entryEditionSchema),
+  // Optional so that the page still opens against an API from before editions were listed here.
+  editions: z.array(entryEditionSchema).optional(),
 });
 
 export type EntryView = z.infer<typeof entryViewSchema>;

@@ -48,8 +48,8 @@ export function ClusterOverlayTable({ peaks, formula }: { peaks: PeakList; formu
                 <td className={cell}>{row.mz}</td>
                 <td className={`${cell} text-right`}>{pct(row.observedPctOfM)}</td>
                 <td className={`${cell} text-right`}>{pct(row.theoreticalPctOfM)}</td>
-                <td className="w-32 px-3 py-1" aria-hidden="true">
-                  <span className="relative block h-2.5 w-28 rounded-sm bg-paper-sunk">
+                <td className="px-3 py-1" aria-hidden="true">
+                  <span className="relative block h-2.5 w-16 rounded-sm bg-paper-sunk lg:w-28">
                     <span className="absolute inset-y-0 left-0 rounded-sm bg-ink" style={{ width: `${((row.observedPctOfM ?? 0) / scale) * 100}%` }} />
                     {row.theoreticalPctOfM === null ? null : (
                       <span className="absolute -inset-y-0.5 w-0.5 bg-copper" style={{ left: `calc(${(row.theoreticalPctOfM / scale) * 100}% - 1px)` }} />

@@ -4,7 +4,8 @@ import { formatDateTime } from '../../../lib/format-date-time';
 import type { EntryEdition } from '../api/entry-view';
 
 /** The frozen editions that hold one of this entry's revisions, each linking to its edition page. */
-export function EntryEditions({ editions, shownNumber }: { editions: EntryEdition[]; shownNumber: number }) {
+export function EntryEditions({ editions, shownNumber }: { editions: EntryEdition[] | undefined; shownNumber: number }) {
+  if (editions === undefined) return <p className="text-sm text-ink-soft">This server does not list the editions of an entry.</p>;
   if (editions.length === 0) return <p className="text-sm text-ink-soft">No frozen edition holds this entry yet.</p>;
   return (
     <ul aria-label="Editions that contain this entry" className="grid gap-1 text-sm leading-6">

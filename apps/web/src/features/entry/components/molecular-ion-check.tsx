@@ -24,7 +24,7 @@ export function MolecularIonCheck({ peaks, formula, nominalMassDa }: MolecularIo
   if ('error' in result) return <p role="alert" className="text-sm text-copper">The spectrum could not be read: {result.error}</p>;
   const { reading, disagreements } = result;
   return (
-    <div className="grid gap-4" data-testid="molecular-ion-check">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-4" data-testid="molecular-ion-check">
       <Facts
         label="Molecular-ion reading"
         rows={[

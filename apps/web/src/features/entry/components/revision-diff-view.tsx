@@ -64,7 +64,7 @@ export function RevisionDiffView({ before, after }: { before: EntryRevision; aft
   const changed = fields.filter((f) => f.changed);
   const same = fields.filter((f) => !f.changed);
   return (
-    <div className="grid gap-5" data-testid="revision-diff">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-5" data-testid="revision-diff">
       <p className="text-sm">
         <span className="text-ink-soft">Cosine similarity of {afterLabel} and {beforeLabel} (0–100): </span>
         <output aria-label="Cosine similarity" className="text-lg font-bold tabular-nums text-ink">
