@@ -93,11 +93,16 @@ async function assertEdition(ds: DataSource, label: string): Promise<void> {
  * entry's current public revision — `published`, or with status `withdrawn` the last withdrawn
  * revision of an entry that has no published one.
  *
- * EXPLAIN (ANALYZE) on 100k published revisions (scripts: docs/benchmarks.md) shows
- *   q:        Bitmap Index Scan on revisions_search_text_trgm (LIKE + `<%`), then a top-N sort;
- *   formula:  Index Scan on revisions_public_formula_idx;
- *   mass:     Index Scan on revisions_public_mass_idx (nominal_mass, entry_id) in sort order;
- *   default:  Index Scan on entries_accession_key + revisions_one_published per row, stopping at LIMIT.
+ * EXPLAIN (ANALYZE) on 100,000 published revisions (entries-list.bench.ts, first page of 200):
+ *   default:  Index Scan entries_accession_key → Index Scan revisions_one_published per row, stops at
+ *             LIMIT (0.5 ms);
+ *   q:        BitmapOr of two Bitmap Index Scans on revisions_search_text_trgm (LIKE and `%>`), then
+ *             the few matches are ranked (5 ms for a misspelled name);
+ *   formula:  Bitmap Index Scan on revisions_public_formula_idx (16 ms for 1,848 matches);
+ *   ranges/elements: Bitmap Index Scan on revisions_element_counts_idx (`?&` of the elements that
+ *             must be present), the ranges checked on those rows (32 ms);
+ *   sort by name / mass / updatedAt: Index Scan on revisions_public_{name,mass,updated}_idx in
+ *             order, the cursor as a row comparison on (value, entry_id).
  */
 function pageSql(query: ListEntriesFilter, plan: ListPlan, cursor: Cursor | null, limit: number) {
   const lowered = query.q ? query.q.toLowerCase() : '';
