@@ -2,6 +2,17 @@
 export interface NoiseModel {
   readonly relative: number;
   readonly absolute: number;
+  /**
+   * Peak lists leave out peaks below the instrument's or the author's reporting threshold (% of
+   * base peak). A position observed as 0 whose model stays at or below this limit is no evidence
+   * against the model and adds nothing to χ². Default 0.
+   */
+  readonly detectionLimit?: number;
+}
+
+/** True when an absent peak is explained by the list's reporting threshold. */
+function belowDetection(observed: number, model: number, noise: NoiseModel): boolean {
+  return observed === 0 && model <= (noise.detectionLimit ?? 0);
 }
 
 /**
@@ -62,10 +73,13 @@ export function fitPattern(observed: Float64Array, pattern: Float64Array, noise:
       }
     }
   }
+  // The fit itself weighs every position (a zero weight would let a shifted cluster grow there
+  // unchecked); only the verdict forgives absent peaks the reporting threshold explains.
   let chiSquare = 0;
   for (let k = 0; k < points; k += 1) {
     const m = model(k);
     const o = observed[k] as number;
+    if (belowDetection(o, m, noise)) continue;
     const s = sigma(Math.max(o, m), noise);
     chiSquare += ((o - m) / s) ** 2;
   }

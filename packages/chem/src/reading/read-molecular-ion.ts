@@ -9,6 +9,9 @@ import { acceptable, acceptableChiSquare, fitHypothesesAt, type HypothesisFit } 
 import { LEAD_DA, moleculeShare, type NoiseModel } from './fit-cluster';
 
 /** What {@link readMolecularIon} concludes about the molecular ion, with every number behind it. */
+/** The molecular ion's fitted share must be at least this fraction of its [M−2H]+ share. */
+const PLAUSIBLE_M_SHARE = 0.3;
+
 export interface MolecularIonReading {
   /** Nominal m/z of M (lightest isotopes), or null when M is likely absent from the spectrum. */
   molecularIonMz: number | null;
@@ -97,6 +100,11 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
   };
   if (!Number.isInteger(suggestLimit)) throw new RangeError(`suggestLimit must be an integer, got ${suggestLimit}`);
   const spectrum = normalizeSpectrum(peaks);
+  // The smallest reported peak shows the list's reporting threshold (common practice: lists are
+  // often cut at 1–3 % of base peak). Capped at 3 %, so that a missing isotope peak above that
+  // still counts against a hypothesis.
+  const smallest = spectrum.reduce((min, [, value]) => Math.min(min, value), 100);
+  const detectedNoise: NoiseModel = { ...noise, detectionLimit: Math.min(3, smallest) };
   const intensity = new Map(spectrum.map(([mz, value]) => [mz, value]));
   const significant = spectrum.filter(([, value]) => value >= minRelIntensity);
   const top = (significant[significant.length - 1] ?? spectrum[spectrum.length - 1])?.[0] as number;
@@ -104,12 +112,23 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
   const perHypothesisFit: HypothesisFit[][] = [];
   for (const [mz] of significant) {
     if (mz < top - WINDOW_DA) continue;
-    const fits = fitHypothesesAt(intensity, mz, top + 2, noise);
+    const fits = fitHypothesesAt(intensity, mz, top + 2, detectedNoise);
     if (fits.length > 0) perHypothesisFit.push(fits);
   }
+  // A candidate whose own cluster is a sliver beside its fitted [M−2H]+ cluster is a degenerate
+  // fit: the shifted cluster explains everything, and a halogen cluster's M is read as its M+2.
+  // [M−H]+ far above M is real (methanol, aldehydes), [M−2H]+ above about three times M is rare
+  // in EI (common practice), so only the latter puts a candidate last.
+  const plausible = (fits: HypothesisFit[]) => {
+    const fit = (fits[0] as HypothesisFit).fit;
+    return fit.scale >= PLAUSIBLE_M_SHARE * fit.shiftedScales[1];
+  };
+  const byReducedChiSquare = (a: HypothesisFit[], b: HypothesisFit[]) =>
+    (a[0] as HypothesisFit).fit.chiSquare / (a[0] as HypothesisFit).fit.points - (b[0] as HypothesisFit).fit.chiSquare / (b[0] as HypothesisFit).fit.points;
   const chosenList =
-    perHypothesisFit.find((fits) => acceptable((fits[0] as HypothesisFit).fit)) ??
-    [...perHypothesisFit].sort((a, b) => (a[0] as HypothesisFit).fit.chiSquare / (a[0] as HypothesisFit).fit.points - (b[0] as HypothesisFit).fit.chiSquare / (b[0] as HypothesisFit).fit.points)[0];
+    perHypothesisFit.find((fits) => plausible(fits) && acceptable((fits[0] as HypothesisFit).fit)) ??
+    [...perHypothesisFit].filter(plausible).sort(byReducedChiSquare)[0] ??
+    [...perHypothesisFit].sort(byReducedChiSquare)[0];
   if (!chosenList) throw new RangeError('no candidate molecular ion could be fitted');
   const best = chosenList[0] as HypothesisFit;
   const fitted = acceptable(best.fit);
