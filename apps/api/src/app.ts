@@ -12,6 +12,8 @@ import type { DataSource } from 'typeorm';
 import type { Env } from './config/env';
 import { apiNotFound, errorMiddleware } from './shared/error-middleware';
 import { csrfGuard } from './shared/csrf-guard';
+import { sessionCookieOptions } from './shared/session-cookie';
+import { signInRateLimit } from './shared/sign-in-rate-limit';
 import { healthRoutes } from './modules/health/health.routes';
 import { authRoutes } from './modules/auth/auth.routes';
 import { configurePassport } from './modules/auth/auth.service';
@@ -98,12 +100,7 @@ export function createApp({ env, dataSource, logger, sessionPool, search: givenS
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: {
-        httpOnly: true,
-        sameSite: 'lax',
-        secure: env.PUBLIC_URL.startsWith('https://'),
-        maxAge: 12 * 60 * 60 * 1000,
-      },
+      cookie: sessionCookieOptions(env.PUBLIC_URL),
     }),
   );
   const passport = configurePassport(dataSource, env);
@@ -111,7 +108,7 @@ export function createApp({ env, dataSource, logger, sessionPool, search: givenS
   app.use(passport.session());
 
   app.use('/api', healthRoutes(dataSource));
-  app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN }));
+  app.use(authRoutes(passport, { localStandIn: env.AUTH_LOCAL_STAND_IN, signInLimit: signInRateLimit({ perMinute: env.SIGN_IN_RATE_PER_MINUTE }) }));
   app.use(
     '/api/v1',
     openapiRoutes(),

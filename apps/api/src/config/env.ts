@@ -4,6 +4,10 @@ const bool = z
   .enum(['true', 'false', '1', '0'])
   .transform((v) => v === 'true' || v === '1');
 
+/** Sign-in requests per client address and minute when SIGN_IN_RATE_PER_MINUTE is unset. */
+export const SIGN_IN_RATE_DEFAULT = 30;
+const SIGN_IN_RATE_TEST_DEFAULT = 600;
+
 const EnvSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -33,12 +37,19 @@ const EnvSchema = z
     // Calls a caller may make at once after being idle (the bucket size); defaults to the rate.
     IDENTIFY_RATE_BURST: z.coerce.number().int().min(1).max(100000).optional(),
     IDENTIFY_BATCH_MAX_SPECTRA: z.coerce.number().int().min(1).max(100000).default(1000),
+    // Sign-in requests (/auth/github and its callback) per client address and minute, per API process.
+    // Unset: 30, or 600 when NODE_ENV=test (test suites sign dozens of users in from 127.0.0.1).
+    SIGN_IN_RATE_PER_MINUTE: z.coerce.number().int().min(1).max(100000).optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && env.SESSION_SECRET.startsWith('dev-only')) {
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'set a real secret in production' });
     }
-  });
+  })
+  .transform((env) => ({
+    ...env,
+    SIGN_IN_RATE_PER_MINUTE: env.SIGN_IN_RATE_PER_MINUTE ?? (env.NODE_ENV === 'test' ? SIGN_IN_RATE_TEST_DEFAULT : SIGN_IN_RATE_DEFAULT),
+  }));
 
 export type Env = z.infer<typeof EnvSchema>;
 

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import type { PassportStatic } from 'passport';
 import { csrfGuard } from '../../shared/csrf-guard';
 
@@ -16,14 +16,16 @@ export function safeReturnTo(value: unknown): string {
   return value;
 }
 
-export function authRoutes(passport: PassportStatic, options: { localStandIn: boolean }): Router {
+/** `signInLimit` guards the start of sign-in and its callback (per client address). */
+export function authRoutes(passport: PassportStatic, options: { localStandIn: boolean; signInLimit?: RequestHandler }): Router {
   const r = Router();
+  const limit: RequestHandler = options.signInLimit ?? ((_req, _res, next) => next());
 
   r.get('/api/auth/config', (_req, res) => {
     res.json({ provider: 'github', localStandIn: options.localStandIn });
   });
 
-  r.get('/auth/github', (req, res, next) => {
+  r.get('/auth/github', limit, (req, res, next) => {
     req.session.returnTo = safeReturnTo(req.query.returnTo);
     req.session.save((err) => {
       if (err) return next(err);
@@ -31,7 +33,7 @@ export function authRoutes(passport: PassportStatic, options: { localStandIn: bo
     });
   });
 
-  r.get('/auth/github/callback', (req, res, next) => {
+  r.get('/auth/github/callback', limit, (req, res, next) => {
     const returnTo = safeReturnTo(req.session.returnTo);
     passport.authenticate('github', (err: unknown, user: Express.User | false) => {
       if (err) {
