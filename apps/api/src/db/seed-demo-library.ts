@@ -31,6 +31,34 @@ async function publish(ds: DataSource, author: SessionUser, reviewer: SessionUse
 }
 
 /**
+ * The demo is loaded in seconds, but a lab's library grows over months: spread the invented
+ * history over about fourteen months (older accessions earlier, each later revision some weeks
+ * after the one before, a few hours to days between sending and deciding). Only the demo's own
+ * timestamps move; content and states stay as the services wrote them, and the audit log keeps
+ * the real times of the load.
+ */
+async function spreadDemoHistory(ds: DataSource): Promise<void> {
+  await ds.transaction(async (m) => {
+    await m.query(`
+      WITH e AS (SELECT id, (max(id) OVER () - id) * 420.0 / greatest(count(*) OVER (), 1) AS days FROM entries)
+      UPDATE entries SET created_at = entries.created_at - make_interval(days => (e.days + 60)::int)
+        FROM e WHERE e.id = entries.id`);
+    await m.query(`
+      WITH e AS (SELECT id, (max(id) OVER () - id) * 420.0 / greatest(count(*) OVER (), 1) AS days FROM entries),
+           r AS (SELECT r.id, e.days, max(r.number) OVER (PARTITION BY r.entry_id) - r.number AS later,
+                        4 + (('x' || substr(md5(r.id::text), 1, 6))::bit(24)::int % 90) AS review_hours
+                   FROM revisions r JOIN e ON e.id = r.entry_id)
+      UPDATE revisions SET
+        created_at = revisions.created_at - make_interval(days => (r.days + 25 * r.later)::int, hours => r.review_hours + 24),
+        updated_at = revisions.updated_at - make_interval(days => (r.days + 25 * r.later)::int),
+        submitted_at = revisions.submitted_at - make_interval(days => (r.days + 25 * r.later)::int, hours => r.review_hours),
+        decided_at = revisions.decided_at - make_interval(days => (r.days + 25 * r.later)::int),
+        published_at = revisions.published_at - make_interval(days => (r.days + 25 * r.later)::int)
+        FROM r WHERE r.id = revisions.id`);
+  });
+}
+
+/**
  * Loads the invented demo library (PRODUCT.md "Demo scenario") through the same service functions
  * the API uses, so every entry has a real history: submissions, decisions, superseded revisions,
  * returned and withdrawn entries, and one edition frozen part-way. Runs once: an existing library
@@ -86,6 +114,7 @@ export async function seedDemoLibrary(ds: DataSource): Promise<number> {
       await withdrawEntry(ds, reviewer, accession, plan.decisionComment ?? 'Standard found contaminated (demo).');
     }
   }
+  await spreadDemoHistory(ds);
   // The mails these invented events queued describe a history nobody needs to be told about.
   await ds.query(`DELETE FROM mail_messages WHERE created_at >= $1`, [startedAt[0]!.t]);
   return plans.length;
