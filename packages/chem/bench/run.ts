@@ -54,7 +54,7 @@ print(`runtime ${runtimeVersion()}; entries ${entries}; queries ${queryCount}; s
 
 // Build: spectra stream from the generator into the index, as a server loading its library from the
 // database in batches would see them; only the time inside add() and pack() counts.
-let start = now();
+let start: number;
 const heapBefore = heapUsedBytes();
 const index = new SpectrumIndex({ reserve: { spectra: entries, peaks: entries * 50 } });
 let addMs = 0;
