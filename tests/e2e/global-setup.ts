@@ -6,7 +6,9 @@ import type { TestProject } from 'vitest/node';
 const ROOT = path.resolve(import.meta.dirname, '../..');
 const TSX = path.join(ROOT, 'node_modules/.bin/tsx');
 const DATABASE_URL = process.env.TEST_DATABASE_URL ?? 'postgres://ionfolio@127.0.0.1:54330/ionfolio_test';
-const PORTS = { api: 8190, oauth: 8191, smtp: 2591 };
+// IONFOLIO_E2E_PORT moves the three ports together, for a second run beside this one.
+const BASE_PORT = Number(process.env.IONFOLIO_E2E_PORT ?? 8190);
+const PORTS = { api: BASE_PORT, oauth: BASE_PORT + 1, smtp: BASE_PORT - 8190 + 2591 };
 const BASE_URL = `http://127.0.0.1:${PORTS.api}`;
 const OAUTH_URL = `http://127.0.0.1:${PORTS.oauth}`;
 
