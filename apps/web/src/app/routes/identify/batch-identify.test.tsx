@@ -63,7 +63,6 @@ describe('batch identify', () => {
       ],
       method: 'composite',
       reverse: false,
-      limit: 5,
     });
 
     const bar = await screen.findByRole('progressbar', { name: 'Unknowns identified' });

@@ -62,9 +62,10 @@ export default function BatchIdentifyPage() {
             const built = buildSearchOptions(options);
             if (!built.ok) return setProblems(built.errors);
             setProblems([]);
-            const { method, reverse, limit, edition } = built.value;
+            // The API keeps a fixed number of candidates per unknown and refuses a `limit`.
+            const { method, reverse, edition } = built.value;
             start.mutate(
-              { spectra, method, reverse, limit, ...(edition ? { edition } : {}) },
+              { spectra, method, reverse, ...(edition ? { edition } : {}) },
               {
                 onSuccess: ({ job }) => {
                   rememberBatchSpectra(job.id, spectra);

@@ -2,7 +2,8 @@ import { z } from 'zod';
 
 export const batchJobSchema = z.looseObject({
   id: z.string(),
-  status: z.enum(['running', 'done', 'failed']),
+  // A job is `queued` from the moment the API accepts it until a worker picks it up.
+  status: z.enum(['queued', 'running', 'done', 'failed']),
   total: z.number().int(),
   done: z.number().int(),
   createdAt: z.string().optional(),

@@ -9,13 +9,16 @@ export function batchJobPath(jobId: string): string {
   return `/api/v1/identify/batch/${encodeURIComponent(jobId)}`;
 }
 
-/** One batch job and the results so far, asked again every ~700 ms until it is done or failed. */
+/** One batch job and the results so far, asked again every ~700 ms until it is done or failed (queued counts as not yet done). */
 export function useBatchJob(jobId: string | null) {
   return useQuery({
     queryKey: ['identify-batch', jobId],
     queryFn: ({ signal }) => apiClient.get(batchJobPath(jobId ?? ''), batchJobResponseSchema, { signal }),
     enabled: jobId !== null,
     staleTime: 0,
-    refetchInterval: (query) => (query.state.data?.job.status === 'running' ? batchPollIntervalMs : false),
+    refetchInterval: (query) => {
+      const status = query.state.data?.job.status;
+      return status === 'queued' || status === 'running' ? batchPollIntervalMs : false;
+    },
   });
 }

@@ -6,7 +6,7 @@ import { batchJobSchema } from './batch-schemas';
 export type BatchSpectrum = { name: string; peaks: [number, number][] };
 
 /** The body of `POST /api/v1/identify/batch`: the unknowns and the search options they share. */
-export type StartBatchBody = { spectra: BatchSpectrum[]; method?: string; reverse?: boolean; limit?: number; edition?: string };
+export type StartBatchBody = { spectra: BatchSpectrum[]; method?: string; reverse?: boolean; edition?: string };
 
 const startBatchResponseSchema = z.object({ job: batchJobSchema });
 

@@ -8,7 +8,7 @@ import { batchJobPath, useBatchJob } from '../api/get-batch-job';
 const headCell = 'px-3 py-2 text-left text-xs font-bold uppercase tracking-wider text-ink-soft';
 const cell = 'px-3 py-1.5 align-top';
 const link = 'underline decoration-rule underline-offset-4 hover:decoration-ink';
-const statusText = { running: 'Identifying…', done: 'Done', failed: 'Failed' } as const;
+const statusText = { queued: 'Waiting to start…', running: 'Identifying…', done: 'Done', failed: 'Failed' } as const;
 
 type BatchProgressProps = {
   jobId: string;
@@ -22,7 +22,7 @@ export function BatchProgress({ jobId, drillHref }: BatchProgressProps) {
   if (query.isPending) return <LoadingState label="Loading the batch…" />;
   if (query.isError) return <ErrorNotice title="The batch could not be followed" error={query.error} onRetry={() => void query.refetch()} />;
   const { job, results } = query.data;
-  const percent = job.total > 0 ? Math.round((job.done / job.total) * 100) : job.status === 'running' ? 0 : 100;
+  const percent = job.total > 0 ? Math.round((job.done / job.total) * 100) : job.status === 'running' || job.status === 'queued' ? 0 : 100;
   return (
     <section aria-label="Batch run" className="grid gap-4">
       <div className="rounded-lg border border-rule-faint bg-paper-raised p-5">
