@@ -176,6 +176,14 @@ describe('identify in the browser', () => {
     await mira.getByRole('link', { name: 'Download the results as CSV' }).waitFor();
     await screenshot(mira, 'identify-3-batch-done');
     console.log(`batch: progress seen ${seen.join(' → ')}; ${hits}/50 best candidates are the source entries`);
+
+    // The rows count from 1, and drilling into the first unknown opens Identify with its own peaks.
+    expect(await bodyRows.first().locator('td').first().textContent()).toBe('1');
+    expect(await bodyRows.last().locator('td').first().textContent()).toBe('50');
+    await mira.getByRole('link', { name: `Open ${names[0]} in Identify` }).click();
+    await mira.waitForURL(/\/identify\?/);
+    const drilled = mira.getByRole('region', { name: 'Results' }).getByRole('table', { name: 'Candidates' });
+    await expect.poll(() => drilled.locator('tbody tr').first().getAttribute('data-accession')).toBe(rows[0]!.accession);
     await mira.context().close();
   });
 });

@@ -22,8 +22,8 @@ const jcamp = [
 
 const best = (accession: string, name: string, similarity: number) => ({ accession, revision: 1, name, similarity });
 const allResults = [
-  { index: 0, name: 'Unknown A (simulated)', best: best('IF-000042', 'Chlorobenzene (simulated)', 96.24), candidates: [best('IF-000042', 'Chlorobenzene (simulated)', 96.24), best('IF-000077', '2-Chlorotoluene (simulated)', 52.1)] },
-  { index: 1, name: 'Unknown B (simulated)', best: null, candidates: [] },
+  { index: 1, name: 'Unknown A (simulated)', best: best('IF-000042', 'Chlorobenzene (simulated)', 96.24), candidates: [best('IF-000042', 'Chlorobenzene (simulated)', 96.24), best('IF-000077', '2-Chlorotoluene (simulated)', 52.1)] },
+  { index: 2, name: 'Unknown B (simulated)', best: null, candidates: [] },
 ];
 
 /** Each poll reports one more unknown done, until both are. */

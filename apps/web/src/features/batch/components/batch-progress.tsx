@@ -74,11 +74,12 @@ export function BatchProgress({ jobId, drillHref }: BatchProgressProps) {
             </thead>
             <tbody>
               {results.map((result) => {
-                const name = result.name ?? `Unknown ${result.index + 1}`;
-                const href = drillHref(result.index, name);
+                // The API counts unknowns from 1; the spectra kept in this tab are an array from 0.
+                const name = result.name ?? `Unknown ${result.index}`;
+                const href = drillHref(result.index - 1, name);
                 return (
                   <tr key={result.index} className="border-b border-rule-faint last:border-b-0">
-                    <td className={`${cell} tabular-nums text-ink-soft`}>{result.index + 1}</td>
+                    <td className={`${cell} tabular-nums text-ink-soft`}>{result.index}</td>
                     <th scope="row" className={`${cell} text-left font-bold text-ink`}>{name}</th>
                     <td className={cell}>
                       {result.best ? (
