@@ -43,6 +43,7 @@ export default defineConfig({
           include: ['src/**/*.test.{ts,tsx}'],
           environment: 'happy-dom',
           setupFiles: ['./src/testing/setup.ts'],
+          testTimeout: 30000,
         },
       },
       {
