@@ -1,6 +1,6 @@
 // Loads a simulated library into the benchmark database as published revisions, writes replicate
 // queries with known answers, and prints identification quality by method.
-// Usage: npm run bench:data -- [--entries 300000] [--replicates 500] [--quality-queries 200] [--seed 1] [--batch 5000]
+// Usage: npm run bench:data -- [--entries 300000] [--replicates 500] [--quality-queries 100] [--seed 1] [--batch 5000]
 // Every row is invented (simulated = true). The benchmark database is emptied first.
 import { createHash } from 'node:crypto';
 import { mkdirSync, writeFileSync } from 'node:fs';
@@ -15,7 +15,7 @@ import { simulatedEntries, type SimulatedEntry } from './simulated-entry';
 
 const entries = numberFlag('entries', 300_000);
 const replicateCount = Math.min(entries, numberFlag('replicates', 500));
-const qualityQueries = Math.min(replicateCount, numberFlag('quality-queries', 200));
+const qualityQueries = Math.min(replicateCount, numberFlag('quality-queries', 100));
 const seed = numberFlag('seed', 1);
 const batchSize = numberFlag('batch', 5000);
 const url = benchDatabaseUrl();
