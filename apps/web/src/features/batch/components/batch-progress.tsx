@@ -4,6 +4,7 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { entryRevisionHref } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date-time';
 import { batchJobPath, useBatchJob } from '../api/get-batch-job';
+import { ProgressBar } from '../../../components/ui/progress-bar';
 
 const headCell = 'px-3 py-2 text-left text-xs font-bold uppercase tracking-wider text-ink-soft';
 const cell = 'px-3 py-1.5 align-top';
@@ -30,22 +31,7 @@ export function BatchProgress({ jobId, drillHref }: BatchProgressProps) {
           Job <code>{job.id}</code>
           {job.createdAt ? ` · started ${formatDateTime(job.createdAt)}` : ''}
         </p>
-        <div className="mt-3 flex items-center gap-3">
-          <div
-            role="progressbar"
-            aria-label="Unknowns identified"
-            aria-valuemin={0}
-            aria-valuemax={job.total}
-            aria-valuenow={job.done}
-            aria-valuetext={`${job.done} of ${job.total} unknowns`}
-            className="h-2.5 flex-1 overflow-hidden rounded-full border border-rule-faint bg-paper-sunk"
-          >
-            <div className="h-full bg-ink transition-[width]" style={{ width: `${percent}%` }} />
-          </div>
-          <span className="text-sm tabular-nums text-ink" data-testid="batch-count">
-            {job.done} / {job.total}
-          </span>
-        </div>
+        <ProgressBar label="Unknowns identified" unit="unknowns" done={job.done} total={job.total} percent={percent} countTestId="batch-count" />
         <p role="status" className="mt-2 text-sm">
           <span className={`font-bold ${job.status === 'failed' ? 'text-copper' : 'text-ink'}`}>{statusText[job.status]}</span>
           {job.error ? ` · ${job.error}` : ''}

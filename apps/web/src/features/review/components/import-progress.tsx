@@ -5,6 +5,7 @@ import { entryHref } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date-time';
 import { useImportJob } from '../api/get-import-job';
 import { bodyCell, headCell, rowBase, tableBase, tableFrame } from './table-styles';
+import { ProgressBar } from '../../../components/ui/progress-bar';
 
 const statusText = { running: 'Importing…', done: 'Done', failed: 'Failed' } as const;
 
@@ -24,22 +25,7 @@ export function ImportProgress({ jobId }: { jobId: string }) {
           {job.fileName}
         </h2>
         <p className="text-sm text-ink-soft">Started {formatDateTime(job.createdAt)}</p>
-        <div className="mt-3 flex items-center gap-3">
-          <div
-            role="progressbar"
-            aria-label="Blocks processed"
-            aria-valuemin={0}
-            aria-valuemax={job.total}
-            aria-valuenow={job.done}
-            aria-valuetext={`${job.done} of ${job.total} blocks`}
-            className="h-2.5 flex-1 overflow-hidden rounded-full border border-rule-faint bg-paper-sunk"
-          >
-            <div className="h-full bg-ink transition-[width]" style={{ width: `${percent}%` }} />
-          </div>
-          <span className="tabular-nums text-sm text-ink" data-testid="import-count">
-            {job.done} / {job.total}
-          </span>
-        </div>
+        <ProgressBar label="Blocks processed" unit="blocks" done={job.done} total={job.total} percent={percent} countTestId="import-count" />
         <p role="status" className="mt-2 text-sm text-ink">
           <span className={job.status === 'failed' ? 'font-bold text-copper' : 'font-bold'}>{statusText[job.status]}</span>
           {' · '}
