@@ -14,10 +14,17 @@ export function ImportProgress({ jobId }: { jobId: string }) {
   const query = useImportJob(jobId);
   if (query.isPending) return <LoadingState label="Loading the import…" />;
   if (query.isError) {
-    return <ErrorNotice title="The import could not be followed" error={query.error} onRetry={() => void query.refetch()} />;
+    return (
+      <ErrorNotice
+        title="The import could not be followed"
+        error={query.error}
+        onRetry={() => void query.refetch()}
+      />
+    );
   }
   const { job, results } = query.data;
-  const percent = job.total > 0 ? Math.round((job.done / job.total) * 100) : job.status === 'running' ? 0 : 100;
+  const percent =
+    job.total > 0 ? Math.round((job.done / job.total) * 100) : job.status === 'running' ? 0 : 100;
   return (
     <section aria-labelledby="import-title" className="space-y-4">
       <div className="rounded-lg border border-rule-faint bg-paper-raised p-5">
@@ -25,9 +32,18 @@ export function ImportProgress({ jobId }: { jobId: string }) {
           {job.fileName}
         </h2>
         <p className="text-sm text-ink-soft">Started {formatDateTime(job.createdAt)}</p>
-        <ProgressBar label="Blocks processed" unit="blocks" done={job.done} total={job.total} percent={percent} countTestId="import-count" />
+        <ProgressBar
+          label="Blocks processed"
+          unit="blocks"
+          done={job.done}
+          total={job.total}
+          percent={percent}
+          countTestId="import-count"
+        />
         <p role="status" className="mt-2 text-sm text-ink">
-          <span className={job.status === 'failed' ? 'font-bold text-copper' : 'font-bold'}>{statusText[job.status]}</span>
+          <span className={job.status === 'failed' ? 'font-bold text-copper' : 'font-bold'}>
+            {statusText[job.status]}
+          </span>
           {' · '}
           {job.imported} imported · {job.rejected} rejected
         </p>
@@ -40,21 +56,38 @@ export function ImportProgress({ jobId }: { jobId: string }) {
             <caption className="sr-only">Result per block</caption>
             <thead className="border-b border-rule bg-paper-sunk">
               <tr>
-                <th scope="col" className={headCell}>Block</th>
-                <th scope="col" className={headCell}>Title</th>
-                <th scope="col" className={headCell}>Result</th>
-                <th scope="col" className={headCell}>Entry or reason</th>
+                <th scope="col" className={headCell}>
+                  Block
+                </th>
+                <th scope="col" className={headCell}>
+                  Title
+                </th>
+                <th scope="col" className={headCell}>
+                  Result
+                </th>
+                <th scope="col" className={headCell}>
+                  Entry or reason
+                </th>
               </tr>
             </thead>
             <tbody>
               {results.map((result) => (
                 <tr key={result.block} data-status={result.status} className={rowBase}>
-                  <th scope="row" className={`${bodyCell} text-left tabular-nums`}>{result.block}</th>
+                  <th scope="row" className={`${bodyCell} text-left tabular-nums`}>
+                    {result.block}
+                  </th>
                   <td className={bodyCell}>{result.title}</td>
-                  <td className={`${bodyCell} ${result.status === 'rejected' ? 'font-bold text-copper' : 'text-ink'}`}>{result.status}</td>
+                  <td
+                    className={`${bodyCell} ${result.status === 'rejected' ? 'font-bold text-copper' : 'text-ink'}`}
+                  >
+                    {result.status}
+                  </td>
                   <td className={bodyCell}>
                     {result.status === 'imported' && result.accession ? (
-                      <Link to={entryHref(result.accession)} className="underline decoration-rule underline-offset-4 hover:decoration-ink">
+                      <Link
+                        to={entryHref(result.accession)}
+                        className="underline decoration-rule underline-offset-4 hover:decoration-ink"
+                      >
                         {result.accession}
                       </Link>
                     ) : (
