@@ -15,7 +15,7 @@ import { readSpectrumFile } from '../../apps/api/src/modules/uploads/spectrum-fi
 import type { SessionUser } from '../../apps/api/src/modules/users/users.schemas';
 import { createLogger } from '../../apps/api/src/shared/logger';
 import { createBenchAccessKey, identify, residentMiB, startApi, type ApiProcess } from './api-process';
-import { REPLICATES_FILE, benchDatabaseUrl, hasFlag, ms, numberFlag, quantile, type ReplicateQuery } from './bench-env';
+import { benchDatabaseUrl, hasFlag, replicatesFile, ms, numberFlag, quantile, type ReplicateQuery } from './bench-env';
 import { simulatedEntries } from './simulated-entry';
 
 const url = benchDatabaseUrl();
@@ -26,7 +26,7 @@ const publishes = numberFlag('publishes', 5);
 const PORT_A = numberFlag('port', 8290);
 const PORT_B = PORT_A + 1;
 
-const replicates = (JSON.parse(readFileSync(REPLICATES_FILE, 'utf8')) as { entries: number; queries: ReplicateQuery[] }).queries;
+const replicates = (JSON.parse(readFileSync(replicatesFile(url), 'utf8')) as { entries: number; queries: ReplicateQuery[] }).queries;
 const pool = new pg.Pool({ connectionString: url, max: 2 });
 
 async function benchUser(login: string, role: 'contributor' | 'curator'): Promise<SessionUser> {

@@ -4,13 +4,17 @@ import type { Peak } from '@ionfolio/chem';
 
 export const ROOT = path.resolve(import.meta.dirname, '../..');
 export const BENCH_DIR = path.join(ROOT, '.data/bench');
-export const REPLICATES_FILE = path.join(BENCH_DIR, 'replicates.json');
 
 /** The benchmark database; refuses any database whose name does not say "bench". */
 export function benchDatabaseUrl(): string {
   const url = process.env.BENCH_DATABASE_URL ?? 'postgres://ionfolio@127.0.0.1:54330/ionfolio_bench';
   if (!/\/[^/]*bench[^/]*$/.test(url)) throw new Error(`BENCH_DATABASE_URL must name a database containing "bench": ${url}`);
   return url;
+}
+
+/** Replicate queries of the library in the benchmark database `url` (one file per database). */
+export function replicatesFile(url: string): string {
+  return path.join(BENCH_DIR, `${new URL(url).pathname.slice(1)}-replicates.json`);
 }
 
 /** `--name value` from the command line as a number, else the fallback. */

@@ -9,7 +9,7 @@ import { SpectrumIndex } from '@ionfolio/chem';
 import { seededRandom } from '../../packages/chem/src/isotopes/seeded-random';
 import { simulatedReplicate } from '@ionfolio/chem';
 import { createDataSource } from '../../apps/api/src/db/data-source';
-import { BENCH_DIR, REPLICATES_FILE, benchDatabaseUrl, numberFlag, type ReplicateQuery } from './bench-env';
+import { BENCH_DIR, benchDatabaseUrl, replicatesFile, numberFlag, type ReplicateQuery } from './bench-env';
 import { qualityTable, replicateQuality } from './replicate-quality';
 import { simulatedEntries, type SimulatedEntry } from './simulated-entry';
 
@@ -152,8 +152,8 @@ async function main(): Promise<void> {
     });
   const file: ReplicateQuery[] = queries.map((q) => ({ accession: accessionOf(q.sourceId), peaks: q.peaks }));
   mkdirSync(BENCH_DIR, { recursive: true });
-  writeFileSync(REPLICATES_FILE, JSON.stringify({ entries, seed, simulated: true, queries: file }));
-  console.log(`wrote ${file.length} replicate queries with known answers to ${REPLICATES_FILE}`);
+  writeFileSync(replicatesFile(url), JSON.stringify({ entries, seed, simulated: true, queries: file }));
+  console.log(`wrote ${file.length} replicate queries with known answers to ${replicatesFile(url)}`);
 
   index.pack();
   t = performance.now();

@@ -11,7 +11,7 @@ import { gzipSync } from 'node:zlib';
 import pg from 'pg';
 import { chromium } from 'playwright-core';
 import { createBenchAccessKey, startApi } from './api-process';
-import { REPLICATES_FILE, ROOT, benchDatabaseUrl, ms, numberFlag, quantile, type ReplicateQuery } from './bench-env';
+import { ROOT, benchDatabaseUrl, replicatesFile, ms, numberFlag, quantile, type ReplicateQuery } from './bench-env';
 
 const url = benchDatabaseUrl();
 const runs = numberFlag('runs', 5);
@@ -97,7 +97,7 @@ async function main() {
   const { rows } = await pool.query<{ id: string }>(`SELECT id FROM users WHERE login = 'bench-curator'`);
   if (!rows[0]) throw new Error('run npm run bench:data first (no bench-curator in the benchmark database)');
   const key = await createBenchAccessKey(pool, rows[0].id);
-  const probe = (JSON.parse(readFileSync(REPLICATES_FILE, 'utf8')) as { queries: ReplicateQuery[] }).queries[0]!.peaks;
+  const probe = (JSON.parse(readFileSync(replicatesFile(url), 'utf8')) as { queries: ReplicateQuery[] }).queries[0]!.peaks;
   const api = await startApi({ databaseUrl: url, port, key, probe, env: { WEB_DIST: OUT_DIR, SESSION_SECRET } });
   const browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
