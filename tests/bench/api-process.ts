@@ -4,7 +4,11 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { newAccessKeySecret, hashAccessKey, visiblePrefix } from '../../apps/api/src/modules/access-keys/access-key-secret';
+import {
+  newAccessKeySecret,
+  hashAccessKey,
+  visiblePrefix,
+} from '../../apps/api/src/modules/access-keys/access-key-secret';
 import type pg from 'pg';
 import { ROOT } from './bench-env';
 
@@ -50,16 +54,19 @@ export function apiEnv(databaseUrl: string, port: number): NodeJS.ProcessEnv {
 /** An access key with the search and library:read scopes for `ownerId`, written straight into the table. */
 export async function createBenchAccessKey(pool: pg.Pool, ownerId: string): Promise<string> {
   const secret = newAccessKeySecret();
-  await pool.query(`INSERT INTO access_keys (owner_id, name, prefix, secret_sha256, scopes) VALUES ($1, 'benchmark', $2, $3, $4)`, [
-    ownerId,
-    visiblePrefix(secret),
-    hashAccessKey(secret),
-    JSON.stringify(['search', 'library:read']),
-  ]);
+  await pool.query(
+    `INSERT INTO access_keys (owner_id, name, prefix, secret_sha256, scopes) VALUES ($1, 'benchmark', $2, $3, $4)`,
+    [ownerId, visiblePrefix(secret), hashAccessKey(secret), JSON.stringify(['search', 'library:read'])],
+  );
   return secret;
 }
 
-export async function identify(baseUrl: string, key: string, peaks: readonly (readonly [number, number])[], extra: Record<string, unknown> = {}) {
+export async function identify(
+  baseUrl: string,
+  key: string,
+  peaks: readonly (readonly [number, number])[],
+  extra: Record<string, unknown> = {},
+) {
   const r = await fetch(`${baseUrl}/api/v1/identify`, {
     method: 'POST',
     headers: { 'content-type': 'application/json', authorization: `Bearer ${key}` },
@@ -72,7 +79,8 @@ export async function identify(baseUrl: string, key: string, peaks: readonly (re
 /** Resident and peak resident memory of a process, from /proc (kB → MiB). */
 export function residentMiB(pid: number): { rss: number; hwm: number } {
   const status = readFileSync(`/proc/${pid}/status`, 'utf8');
-  const kb = (label: string) => Number(new RegExp(`^${label}:\\s+(\\d+) kB`, 'm').exec(status)?.[1] ?? Number.NaN);
+  const kb = (label: string) =>
+    Number(new RegExp(`^${label}:\\s+(\\d+) kB`, 'm').exec(status)?.[1] ?? Number.NaN);
   return { rss: kb('VmRSS') / 1024, hwm: kb('VmHWM') / 1024 };
 }
 
@@ -120,7 +128,11 @@ export async function startApi(options: {
       try {
         const entry = JSON.parse(line) as { msg?: string; ms?: number; revisions?: number; level?: number };
         if (entry.msg === 'library index loaded' && !api.indexLoaded) {
-          api.indexLoaded = { atMs: performance.now() - t0, loadMs: entry.ms ?? Number.NaN, revisions: entry.revisions ?? Number.NaN };
+          api.indexLoaded = {
+            atMs: performance.now() - t0,
+            loadMs: entry.ms ?? Number.NaN,
+            revisions: entry.revisions ?? Number.NaN,
+          };
         }
         if ((entry.level ?? 0) >= 50) errors.push(line);
       } catch {
@@ -131,7 +143,8 @@ export async function startApi(options: {
   child.stderr!.on('data', (chunk: Buffer) => errors.push(chunk.toString('utf8')));
   const until = Date.now() + (options.timeoutMs ?? 180_000);
   while (Number.isNaN(api.healthAtMs)) {
-    if (child.exitCode !== null) throw new Error(`API on ${port} exited ${child.exitCode}: ${errors.join('\n').slice(0, 2000)}`);
+    if (child.exitCode !== null)
+      throw new Error(`API on ${port} exited ${child.exitCode}: ${errors.join('\n').slice(0, 2000)}`);
     if (Date.now() > until) throw new Error(`API on ${port} did not answer /api/health`);
     try {
       if ((await fetch(`${baseUrl}/api/health`)).ok) api.healthAtMs = performance.now() - t0;

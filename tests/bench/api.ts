@@ -15,7 +15,15 @@ import { readSpectrumFile } from '../../apps/api/src/modules/uploads/spectrum-fi
 import type { SessionUser } from '../../apps/api/src/modules/users/users.schemas';
 import { createLogger } from '../../apps/api/src/shared/logger';
 import { createBenchAccessKey, identify, residentMiB, startApi, type ApiProcess } from './api-process';
-import { benchDatabaseUrl, hasFlag, replicatesFile, ms, numberFlag, quantile, type ReplicateQuery } from './bench-env';
+import {
+  benchDatabaseUrl,
+  hasFlag,
+  replicatesFile,
+  ms,
+  numberFlag,
+  quantile,
+  type ReplicateQuery,
+} from './bench-env';
 import { simulatedEntries } from './simulated-entry';
 
 const url = benchDatabaseUrl();
@@ -26,7 +34,9 @@ const publishes = numberFlag('publishes', 5);
 const PORT_A = numberFlag('port', 8290);
 const PORT_B = PORT_A + 1;
 
-const replicates = (JSON.parse(readFileSync(replicatesFile(url), 'utf8')) as { entries: number; queries: ReplicateQuery[] }).queries;
+const replicates = (
+  JSON.parse(readFileSync(replicatesFile(url), 'utf8')) as { entries: number; queries: ReplicateQuery[] }
+).queries;
 const pool = new pg.Pool({ connectionString: url, max: 2 });
 
 async function benchUser(login: string, role: 'contributor' | 'curator'): Promise<SessionUser> {
@@ -34,7 +44,10 @@ async function benchUser(login: string, role: 'contributor' | 'curator'): Promis
     `INSERT INTO users (github_id, login, display_name, role) VALUES ($1, $2, $3, $4) ON CONFLICT (login) DO NOTHING`,
     [`-${login.length}${role.length}77`, login, `${login} (simulated)`, role],
   );
-  const { rows } = await pool.query<SessionUser>(`SELECT id, login, display_name AS "displayName", email, role FROM users WHERE login = $1`, [login]);
+  const { rows } = await pool.query<SessionUser>(
+    `SELECT id, login, display_name AS "displayName", email, role FROM users WHERE login = $1`,
+    [login],
+  );
   return rows[0]!;
 }
 
@@ -48,7 +61,9 @@ async function loadTest(api: ApiProcess, key: string, connections: number) {
     duration: durationS,
     method: 'POST',
     headers: { 'content-type': 'application/json', authorization: `Bearer ${key}` },
-    requests: [{ method: 'POST', setupRequest: (req) => ({ ...req, body: bodies[next++ % bodies.length]! }) }],
+    requests: [
+      { method: 'POST', setupRequest: (req) => ({ ...req, body: bodies[next++ % bodies.length]! }) },
+    ],
   });
   instance.on('response', (_client, statusCode, _bytes, responseTimeMs) => {
     if (statusCode === 200) latencies.push(responseTimeMs);
@@ -58,10 +73,23 @@ async function loadTest(api: ApiProcess, key: string, connections: number) {
     `identify, ${String(connections).padStart(2)} connection(s), ${durationS} s: median ${ms(quantile(latencies, 0.5))}, p95 ${ms(quantile(latencies, 0.95))},` +
     ` p99 ${ms(quantile(latencies, 0.99))}, ${(latencies.length / result.duration).toFixed(1)} req/s (${latencies.length} answers, non-2xx ${result.non2xx}, errors ${result.errors})`;
   console.log(line);
-  return { connections, median: quantile(latencies, 0.5), p95: quantile(latencies, 0.95), p99: quantile(latencies, 0.99), rps: latencies.length / result.duration };
+  return {
+    connections,
+    median: quantile(latencies, 0.5),
+    p95: quantile(latencies, 0.95),
+    p99: quantile(latencies, 0.99),
+    rps: latencies.length / result.duration,
+  };
 }
 
-async function waitUntilFound(baseUrl: string, key: string, peaks: Peak[], accession: string, fromMs: number, timeoutMs = 10_000): Promise<number> {
+async function waitUntilFound(
+  baseUrl: string,
+  key: string,
+  peaks: Peak[],
+  accession: string,
+  fromMs: number,
+  timeoutMs = 10_000,
+): Promise<number> {
   for (;;) {
     const answer = await identify(baseUrl, key, peaks, { limit: 3 });
     if (answer.candidates.some((c) => c.accession === accession)) return performance.now() - fromMs;
@@ -87,13 +115,17 @@ async function listBench(api: ApiProcess, key: string) {
     let count = 0;
     for (let i = 0; i < listRuns; i++) {
       const t = performance.now();
-      const r = await fetch(`${api.baseUrl}/api/v1/entries?limit=50${query ? `&${query}` : ''}`, { headers: { authorization: `Bearer ${key}` } });
+      const r = await fetch(`${api.baseUrl}/api/v1/entries?limit=50${query ? `&${query}` : ''}`, {
+        headers: { authorization: `Bearer ${key}` },
+      });
       if (!r.ok) throw new Error(`GET /entries ${query} answered ${r.status}: ${await r.text()}`);
       const body = (await r.json()) as { entries?: unknown[]; items?: unknown[] };
       times.push(performance.now() - t);
       count = (body.entries ?? body.items ?? []).length;
     }
-    console.log(`GET /api/v1/entries ${label.padEnd(32)} median ${ms(quantile(times, 0.5))}, p90 ${ms(quantile(times, 0.9))} (${count} rows on the page)`);
+    console.log(
+      `GET /api/v1/entries ${label.padEnd(32)} median ${ms(quantile(times, 0.5))}, p90 ${ms(quantile(times, 0.9))} (${count} rows on the page)`,
+    );
   }
 }
 
@@ -103,20 +135,45 @@ async function importBench(curator: SessionUser) {
   const blocks: string[] = [];
   for (let i = 0; i < importSpectra; i++) {
     const e = generator.next().value!;
-    blocks.push(writeJcamp({ title: `${e.name} import (simulated)`, formula: e.formula, peaks: e.peaks, labels: { BLOCK_ID: String(i + 1) } }).trimEnd());
+    blocks.push(
+      writeJcamp({
+        title: `${e.name} import (simulated)`,
+        formula: e.formula,
+        peaks: e.peaks,
+        labels: { BLOCK_ID: String(i + 1) },
+      }).trimEnd(),
+    );
   }
-  const text = ['##TITLE=Benchmark import (simulated)', '##JCAMP-DX=5.01', '##DATA TYPE=LINK', `##BLOCKS=${blocks.length}`, ...blocks, '##END=', ''].join('\n');
+  const text = [
+    '##TITLE=Benchmark import (simulated)',
+    '##JCAMP-DX=5.01',
+    '##DATA TYPE=LINK',
+    `##BLOCKS=${blocks.length}`,
+    ...blocks,
+    '##END=',
+    '',
+  ].join('\n');
   const buffer = Buffer.from(text, 'utf8');
   const ds = createDataSource(url);
   await ds.initialize();
   const t0 = performance.now();
   const { blocks: parsed } = readSpectrumFile('benchmark-import.jdx', buffer);
   const parseMs = performance.now() - t0;
-  const started = await startImport(ds, createLogger('warn'), curator, 'benchmark-import.jdx', parsed, 'draft');
+  const started = await startImport(
+    ds,
+    createLogger('warn'),
+    curator,
+    'benchmark-import.jdx',
+    parsed,
+    'draft',
+  );
   const id = (started.job as { id: string }).id;
   let job: { status: string; done: number; imported: number; rejected: number } | undefined;
   for (;;) {
-    const { rows } = await pool.query(`SELECT status, done, imported, rejected FROM import_jobs WHERE id = $1`, [id]);
+    const { rows } = await pool.query(
+      `SELECT status, done, imported, rejected FROM import_jobs WHERE id = $1`,
+      [id],
+    );
     job = rows[0];
     if (job && job.status !== 'running') break;
     await sleep(250);
@@ -129,7 +186,13 @@ async function importBench(curator: SessionUser) {
   await ds.destroy();
 }
 
-async function publishBench(a: ApiProcess, b: ApiProcess, key: string, contributor: SessionUser, curator: SessionUser) {
+async function publishBench(
+  a: ApiProcess,
+  b: ApiProcess,
+  key: string,
+  contributor: SessionUser,
+  curator: SessionUser,
+) {
   const ds = createDataSource(url);
   await ds.initialize();
   const generator = simulatedEntries(seededRandom(777));
@@ -137,10 +200,23 @@ async function publishBench(a: ApiProcess, b: ApiProcess, key: string, contribut
   const onB: number[] = [];
   for (let i = 0; i < publishes; i++) {
     const e = generator.next().value!;
-    const draft = await createEntry(ds, contributor, { name: `${e.name} published during the benchmark (simulated)`, formula: e.formula, peaks: e.peaks } as never, { simulated: true });
+    const draft = await createEntry(
+      ds,
+      contributor,
+      {
+        name: `${e.name} published during the benchmark (simulated)`,
+        formula: e.formula,
+        peaks: e.peaks,
+      } as never,
+      { simulated: true },
+    );
     const submitted = await submitRevision(ds, contributor, draft.id, draft.lockVersion);
     const t = performance.now();
-    await decide(ds, curator, submitted.id, { decision: 'publish', comment: '', lockVersion: submitted.lockVersion });
+    await decide(ds, curator, submitted.id, {
+      decision: 'publish',
+      comment: '',
+      lockVersion: submitted.lockVersion,
+    });
     const [ta, tb] = await Promise.all([
       waitUntilFound(a.baseUrl, key, e.peaks, draft.accession, t),
       waitUntilFound(b.baseUrl, key, e.peaks, draft.accession, t),
@@ -158,8 +234,12 @@ async function publishBench(a: ApiProcess, b: ApiProcess, key: string, contribut
 }
 
 async function main() {
-  const { rows } = await pool.query<{ n: number }>(`SELECT count(*)::int AS n FROM revisions WHERE state = 'published'`);
-  console.log(`# bench:api: ${rows[0]!.n} published revisions, ${replicates.length} replicate queries, load tests ${durationS} s each`);
+  const { rows } = await pool.query<{ n: number }>(
+    `SELECT count(*)::int AS n FROM revisions WHERE state = 'published'`,
+  );
+  console.log(
+    `# bench:api: ${rows[0]!.n} published revisions, ${replicates.length} replicate queries, load tests ${durationS} s each`,
+  );
   const curator = await benchUser('bench-curator', 'curator');
   const reviewer = await benchUser('bench-reviewer', 'curator');
   const contributor = await benchUser('bench-contributor', 'contributor');
@@ -173,7 +253,9 @@ async function main() {
         ` at ${ms(a.indexLoaded?.atMs ?? Number.NaN, 0)} after spawn; /api/health at ${ms(a.healthAtMs, 0)}; first identify at ${ms(a.firstIdentifyAtMs, 0)}`,
     );
     const idle = residentMiB(a.child.pid!);
-    console.log(`process A memory with the index: VmRSS ${idle.rss.toFixed(0)} MiB (peak so far ${idle.hwm.toFixed(0)} MiB)`);
+    console.log(
+      `process A memory with the index: VmRSS ${idle.rss.toFixed(0)} MiB (peak so far ${idle.hwm.toFixed(0)} MiB)`,
+    );
 
     // Correctness on the way: the known source among the candidates of a few replicates.
     // tookMs is the server's own time inside identify (index search, matched peaks, molecular-ion
@@ -183,7 +265,9 @@ async function main() {
     const roundTrip: number[] = [];
     for (const q of replicates.slice(0, 50)) {
       const t = performance.now();
-      const answer = (await identify(a.baseUrl, key, q.peaks)) as Awaited<ReturnType<typeof identify>> & { tookMs: number };
+      const answer = (await identify(a.baseUrl, key, q.peaks)) as Awaited<ReturnType<typeof identify>> & {
+        tookMs: number;
+      };
       roundTrip.push(performance.now() - t);
       took.push(answer.tookMs);
       if (answer.candidates[0]?.accession === q.accession) found++;
@@ -196,13 +280,17 @@ async function main() {
     const runs = [];
     for (const connections of [1, 4, 16]) runs.push(await loadTest(a, key, connections));
     const loaded = residentMiB(a.child.pid!);
-    console.log(`process A memory after the load tests: VmRSS ${loaded.rss.toFixed(0)} MiB, peak ${loaded.hwm.toFixed(0)} MiB`);
+    console.log(
+      `process A memory after the load tests: VmRSS ${loaded.rss.toFixed(0)} MiB, peak ${loaded.hwm.toFixed(0)} MiB`,
+    );
 
     await listBench(a, key);
 
     const b = await startApi({ databaseUrl: url, port: PORT_B, key, probe });
     try {
-      console.log(`process B start: index loaded ${ms(b.indexLoaded?.loadMs ?? Number.NaN, 0)}, first identify at ${ms(b.firstIdentifyAtMs, 0)} after spawn`);
+      console.log(
+        `process B start: index loaded ${ms(b.indexLoaded?.loadMs ?? Number.NaN, 0)}, first identify at ${ms(b.firstIdentifyAtMs, 0)} after spawn`,
+      );
       await publishBench(a, b, key, contributor, reviewer);
     } finally {
       await b.stop();

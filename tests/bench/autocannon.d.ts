@@ -24,7 +24,10 @@ declare module 'autocannon' {
     duration: number;
   }
   interface Instance extends EventEmitter, PromiseLike<Result> {
-    on(event: 'response', listener: (client: unknown, statusCode: number, resBytes: number, responseTimeMs: number) => void): this;
+    on(
+      event: 'response',
+      listener: (client: unknown, statusCode: number, resBytes: number, responseTimeMs: number) => void,
+    ): this;
   }
   function autocannon(options: Options): Instance;
   export default autocannon;

@@ -8,7 +8,8 @@ export const BENCH_DIR = path.join(ROOT, '.data/bench');
 /** The benchmark database; refuses any database whose name does not say "bench". */
 export function benchDatabaseUrl(): string {
   const url = process.env.BENCH_DATABASE_URL ?? 'postgres://ionfolio@127.0.0.1:54330/ionfolio_bench';
-  if (!/\/[^/]*bench[^/]*$/.test(url)) throw new Error(`BENCH_DATABASE_URL must name a database containing "bench": ${url}`);
+  if (!/\/[^/]*bench[^/]*$/.test(url))
+    throw new Error(`BENCH_DATABASE_URL must name a database containing "bench": ${url}`);
   return url;
 }
 

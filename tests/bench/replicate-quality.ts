@@ -40,7 +40,15 @@ export function replicateQuality(
         rankSum += rank;
       }
       times.sort((a, b) => a - b);
-      rows.push({ method, reverse, top1, top5, meanRank: rankSum / queries.length, misses, medianMs: times[Math.floor(times.length / 2)] ?? 0 });
+      rows.push({
+        method,
+        reverse,
+        top1,
+        top5,
+        meanRank: rankSum / queries.length,
+        misses,
+        medianMs: times[Math.floor(times.length / 2)] ?? 0,
+      });
     }
   }
   return rows;
@@ -52,6 +60,9 @@ export function qualityTable(rows: readonly QualityRow[], total: number): string
   return [
     '| method | direction | top-1 | top-5 | mean rank | not in top 100 | median ms/query (in-process) |',
     '|---|---|---|---|---|---|---|',
-    ...rows.map((r) => `| ${r.method} | ${r.reverse ? 'reverse' : 'forward'} | ${pct(r.top1)} | ${pct(r.top5)} | ${r.meanRank.toFixed(2)} | ${r.misses} | ${r.medianMs.toFixed(1)} |`),
+    ...rows.map(
+      (r) =>
+        `| ${r.method} | ${r.reverse ? 'reverse' : 'forward'} | ${pct(r.top1)} | ${pct(r.top5)} | ${r.meanRank.toFixed(2)} | ${r.misses} | ${r.medianMs.toFixed(1)} |`,
+    ),
   ].join('\n');
 }

@@ -1,6 +1,12 @@
 // One simulated library entry for the benchmarks: an invented formula from realistic element ranges,
 // fragments from packages/chem's simulated spectra, and the molecular-ion isotope cluster of the formula.
-import { isotopeCluster, monoisotopicMass, nominalMass, simulatedReplicate, simulatedSpectrum } from '@ionfolio/chem';
+import {
+  isotopeCluster,
+  monoisotopicMass,
+  nominalMass,
+  simulatedReplicate,
+  simulatedSpectrum,
+} from '@ionfolio/chem';
 
 export interface SimulatedEntry {
   name: string;
@@ -46,8 +52,18 @@ export function simulatedFormula(random: () => number): string {
   let rings = Math.floor(random() * Math.min(9, c));
   while (maxH - 2 * rings < 0) rings--;
   const h = maxH - 2 * rings;
-  const part = (symbol: string, atoms: number) => (atoms === 0 ? '' : atoms === 1 ? symbol : `${symbol}${atoms}`);
-  return part('C', c) + part('H', h) + part('Br', br) + part('Cl', cl) + part('F', f) + part('N', n) + part('O', o) + part('S', s);
+  const part = (symbol: string, atoms: number) =>
+    atoms === 0 ? '' : atoms === 1 ? symbol : `${symbol}${atoms}`;
+  return (
+    part('C', c) +
+    part('H', h) +
+    part('Br', br) +
+    part('Cl', cl) +
+    part('F', f) +
+    part('N', n) +
+    part('O', o) +
+    part('S', s)
+  );
 }
 
 const clusterCache = new Map<string, { mz: number; relIntensity: number }[]>();
@@ -72,12 +88,17 @@ export function normalised(peaks: Iterable<readonly [number, number]>): [number,
     .sort((a, b) => a[0] - b[0]);
 }
 
-function withMolecularIon(random: () => number, formula: string, fragments: readonly (readonly [number, number])[]): [number, number][] {
+function withMolecularIon(
+  random: () => number,
+  formula: string,
+  fragments: readonly (readonly [number, number])[],
+): [number, number][] {
   const byMz = new Map<number, number>(fragments.map(([mz, i]) => [mz, i]));
   // About one in seven EI spectra shows no molecular ion (alcohols, branched alkanes): common practice.
   if (random() >= 0.15) {
-    const scale = 100 * Math.max(0.02, Math.pow(random(), 2)) / 100;
-    for (const { mz, relIntensity } of molecularCluster(formula)) byMz.set(mz, Math.max(byMz.get(mz) ?? 0, relIntensity * scale));
+    const scale = (100 * Math.max(0.02, Math.pow(random(), 2))) / 100;
+    for (const { mz, relIntensity } of molecularCluster(formula))
+      byMz.set(mz, Math.max(byMz.get(mz) ?? 0, relIntensity * scale));
   }
   return normalised(byMz);
 }
@@ -96,15 +117,35 @@ export function* simulatedEntries(random: () => number): Generator<SimulatedEntr
     const formula = simulatedFormula(random);
     const massDa = nominalMass(formula);
     const mono = monoisotopicMass(formula);
-    const fragments = simulatedSpectrum(random, { minMz: 26, maxMz: Math.max(40, massDa - 1), peakCount: 25 + Math.floor(random() * 40) });
+    const fragments = simulatedSpectrum(random, {
+      minMz: 26,
+      maxMz: Math.max(40, massDa - 1),
+      peakCount: 25 + Math.floor(random() * 40),
+    });
     const stem = pick(random, SYLLABLES[0]!) + pick(random, SYLLABLES[1]!) + pick(random, SYLLABLES[2]!);
     const name = `${stem[0]!.toUpperCase()}${stem.slice(1)} ${++serial}`;
     const parent = withMolecularIon(random, formula, fragments);
-    yield { name, formula, nominalMass: massDa, monoisotopicMass: mono, peaks: parent, retentionIndex: retentionIndex(random, massDa) };
+    yield {
+      name,
+      formula,
+      nominalMass: massDa,
+      monoisotopicMass: mono,
+      peaks: parent,
+      retentionIndex: retentionIndex(random, massDa),
+    };
     const isomers = random() < 0.3 ? 1 + Math.floor(random() * 4) : 0;
     for (let i = 0; i < isomers; i++) {
-      const peaks = normalised(simulatedReplicate(parent, random, { noise: 0.4, dropFraction: 0.2, extraPeaks: 5, maxMz: massDa }));
-      yield { name: `${name} isomer ${i + 1}`, formula, nominalMass: massDa, monoisotopicMass: mono, peaks, retentionIndex: retentionIndex(random, massDa) };
+      const peaks = normalised(
+        simulatedReplicate(parent, random, { noise: 0.4, dropFraction: 0.2, extraPeaks: 5, maxMz: massDa }),
+      );
+      yield {
+        name: `${name} isomer ${i + 1}`,
+        formula,
+        nominalMass: massDa,
+        monoisotopicMass: mono,
+        peaks,
+        retentionIndex: retentionIndex(random, massDa),
+      };
     }
   }
 }

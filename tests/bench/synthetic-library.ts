@@ -67,7 +67,11 @@ async function insertBatch(pool: pg.Pool, userId: string, rows: Row[]): Promise<
         rows.map((r) => r.entry.peaks.length),
         rows.map((r) => r.entry.peaks.find(([, i]) => i === 100)![0]),
         rows.map((r) => r.entry.retentionIndex),
-        rows.map((r) => createHash('sha256').update(JSON.stringify([r.entry.name, r.entry.formula, r.entry.peaks])).digest('hex')),
+        rows.map((r) =>
+          createHash('sha256')
+            .update(JSON.stringify([r.entry.name, r.entry.formula, r.entry.peaks]))
+            .digest('hex'),
+        ),
         rows.map((r) => r.publishedAt),
         userId,
       ],
@@ -82,7 +86,9 @@ async function insertBatch(pool: pg.Pool, userId: string, rows: Row[]): Promise<
 }
 
 async function main(): Promise<void> {
-  console.log(`# bench:data: ${entries} simulated entries into ${url.replace(/\/\/[^@]*@/, '//')}, seed ${seed}, batches of ${batchSize}`);
+  console.log(
+    `# bench:data: ${entries} simulated entries into ${url.replace(/\/\/[^@]*@/, '//')}, seed ${seed}, batches of ${batchSize}`,
+  );
   let t = performance.now();
   await resetAndMigrate();
   console.log(`schema reset and migrated in ${Math.round(performance.now() - t)} ms`);
@@ -137,7 +143,9 @@ async function main(): Promise<void> {
   await pool.query('VACUUM ANALYZE entries');
   await pool.query('VACUUM ANALYZE revisions');
   console.log(`VACUUM ANALYZE in ${((performance.now() - t) / 1000).toFixed(1)} s`);
-  const size = await pool.query<{ size: string }>(`SELECT pg_size_pretty(pg_database_size(current_database())) AS size`);
+  const size = await pool.query<{ size: string }>(
+    `SELECT pg_size_pretty(pg_database_size(current_database())) AS size`,
+  );
   console.log(`database size ${size.rows[0]!.size}`);
   await pool.end();
 
@@ -148,7 +156,10 @@ async function main(): Promise<void> {
     .sort((a, b) => a - b)
     .map((i) => {
       const source = sourcePeaks.get(i)!;
-      return { sourceId: i, peaks: simulatedReplicate(source.peaks, replicateRandom, { maxMz: Math.max(40, source.nominalMass) }) };
+      return {
+        sourceId: i,
+        peaks: simulatedReplicate(source.peaks, replicateRandom, { maxMz: Math.max(40, source.nominalMass) }),
+      };
     });
   const file: ReplicateQuery[] = queries.map((q) => ({ accession: accessionOf(q.sourceId), peaks: q.peaks }));
   mkdirSync(BENCH_DIR, { recursive: true });
@@ -158,7 +169,9 @@ async function main(): Promise<void> {
   index.pack();
   t = performance.now();
   const rows = replicateQuality(index, queries.slice(0, qualityQueries));
-  console.log(`\nidentification quality, ${qualityQueries} replicate queries against ${entries} spectra (${((performance.now() - t) / 1000).toFixed(1)} s):\n`);
+  console.log(
+    `\nidentification quality, ${qualityQueries} replicate queries against ${entries} spectra (${((performance.now() - t) / 1000).toFixed(1)} s):\n`,
+  );
   console.log(qualityTable(rows, qualityQueries));
 }
 
