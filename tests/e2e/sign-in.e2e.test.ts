@@ -18,8 +18,11 @@ describe('signing in through the OAuth stand-in', () => {
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
     await page.goto(`${baseUrl}/sign-in`);
-    await expect(signInControl(page).isVisible()).resolves.toBe(true);
-    await expect(page.getByText(/stand-in/i).first().isVisible()).resolves.toBe(true);
+    // The note comes from /api/auth/config after the first render: wait for it, then look.
+    await signInControl(page).waitFor();
+    expect(await signInControl(page).isVisible()).toBe(true);
+    await page.getByText(/stand-in/i).first().waitFor();
+    expect(await page.getByText(/stand-in/i).first().isVisible()).toBe(true);
     await screenshot(page, 'sign-in');
 
     await signInThroughStandIn(page, baseUrl, 'dana.okafor', '/library');
