@@ -30,7 +30,7 @@ describe('signing in through the OAuth stand-in', () => {
     const role = page.getByTestId('current-role');
     await role.waitFor();
     expect((await role.textContent())?.toLowerCase()).toContain('curator');
-    await expect(page.getByText('Dana Okafor').first().isVisible()).resolves.toBe(true);
+    await page.getByText('Dana Okafor').first().waitFor();
     await screenshot(page, 'signed-in-curator');
     expect(errors).toEqual([]);
     await context.close();
