@@ -3,6 +3,7 @@ import { useMemo } from 'react';
 import { readEntrySpectrum } from '../utils/read-entry-spectrum';
 import { ClusterOverlayTable } from './cluster-overlay-table';
 import { Facts } from './entry-panel';
+import { ReadingEvidence, ReadingNotes } from '../../../components/spectrum/reading-evidence';
 
 function carbonText(reading: MolecularIonReading): string {
   const c = reading.carbonRange;
@@ -19,9 +20,18 @@ type MolecularIonCheckProps = { peaks: PeakList; formula: string; nominalMassDa:
 
 /** The molecular-ion check of the spectrum shown, set against the stated formula, with its cluster overlay. */
 export function MolecularIonCheck({ peaks, formula, nominalMassDa }: MolecularIonCheckProps) {
-  const result = useMemo(() => readEntrySpectrum(peaks, formula, nominalMassDa), [peaks, formula, nominalMassDa]);
-  if (peaks.length === 0) return <p className="text-sm text-ink-soft">This revision has no peaks, so there is nothing to read.</p>;
-  if ('error' in result) return <p role="alert" className="text-sm text-copper">The spectrum could not be read: {result.error}</p>;
+  const result = useMemo(
+    () => readEntrySpectrum(peaks, formula, nominalMassDa),
+    [peaks, formula, nominalMassDa],
+  );
+  if (peaks.length === 0)
+    return <p className="text-sm text-ink-soft">This revision has no peaks, so there is nothing to read.</p>;
+  if ('error' in result)
+    return (
+      <p role="alert" className="text-sm text-copper">
+        The spectrum could not be read: {result.error}
+      </p>
+    );
   const { reading, disagreements } = result;
   return (
     <div className="grid grid-cols-[minmax(0,1fr)] gap-4" data-testid="molecular-ion-check">
@@ -31,7 +41,9 @@ export function MolecularIonCheck({ peaks, formula, nominalMassDa }: MolecularIo
           [
             'Molecular ion',
             reading.molecularIonMz === null ? (
-              <span className="text-copper">likely absent (highest cluster starts at m/z {reading.clusterStartMz})</span>
+              <span className="text-copper">
+                likely absent (highest cluster starts at m/z {reading.clusterStartMz})
+              </span>
             ) : (
               `likely M = m/z ${reading.molecularIonMz}`
             ),
@@ -44,26 +56,8 @@ export function MolecularIonCheck({ peaks, formula, nominalMassDa }: MolecularIo
           ['Nitrogen rule', nitrogenText(reading.nitrogenParity)],
         ]}
       />
-      {disagreements.length + reading.notes.length > 0 ? (
-        <ul aria-label="Reading notes" className="grid gap-1 text-sm">
-          {[...disagreements, ...reading.notes].map((note) => (
-            <li key={note} className="border-l-2 border-copper pl-3 text-ink">
-              {note}
-            </li>
-          ))}
-        </ul>
-      ) : null}
-      <details className="text-sm">
-        <summary className="cursor-pointer font-bold text-ink">Evidence ({reading.evidence.length} numbers)</summary>
-        <dl className="mt-2 grid gap-1">
-          {reading.evidence.map((item, index) => (
-            <div key={`${item.label}-${index}`} className="grid gap-x-3 sm:grid-cols-[11rem_1fr]">
-              <dt className="text-ink-soft">{item.label}</dt>
-              <dd className="tabular-nums text-ink">{item.value}</dd>
-            </div>
-          ))}
-        </dl>
-      </details>
+      <ReadingNotes label="Reading notes" notes={[...disagreements, ...reading.notes]} />
+      <ReadingEvidence evidence={reading.evidence} />
       <ClusterOverlayTable peaks={peaks} formula={formula} />
     </div>
   );
