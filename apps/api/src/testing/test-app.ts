@@ -71,8 +71,9 @@ export const uniqueLogin = (prefix = 'user') => `${prefix}-${randomBytes(4).toSt
 /**
  * Signs `agent` in through the whole OAuth flow: the app's redirect to the provider, the
  * provider's sign-in form, the callback with its code, the token exchange and the profile fetch.
+ * `agent` may also be bound to the URL of a spawned API process that uses `ctx.oauth`.
  */
-export async function signIn(ctx: TestContext, agent: TestAgent, login: string): Promise<void> {
+export async function signIn(ctx: Pick<TestContext, 'oauth'>, agent: TestAgent, login: string): Promise<void> {
   const start = await agent.get('/auth/github?returnTo=/identify').expect(302);
   const authorize = new URL(start.headers.location ?? '');
   if (!authorize.href.startsWith(ctx.oauth.url)) throw new Error(`sign-in went to ${authorize.href}`);
