@@ -88,37 +88,6 @@ describe('editions', () => {
   });
 });
 
-describe('bulk import', () => {
-  it('imports good blocks, rejects bad ones with the reason and writes nothing for them', async () => {
-    const curator = await signInAs(ctx, 'curator');
-    const block = (title: string, molform: string, peaks: string) =>
-      `##TITLE=${title}\n##JCAMP-DX=5.01\n##DATA TYPE=MASS SPECTRUM\n##MOLFORM=${molform}\n##PEAK TABLE=(XY..XY)\n${peaks}\n##END=\n`;
-    const file = [block('Import good 1', 'C 3 H 6 O', '43,100 58,30'), block('Import bad formula', 'C 3 Xx 6', '43,100'), block('Import good 2', 'C 2 H 6 O', '31,100 45,40 46,20')].join('');
-    const before = await ctx.ds.query(`SELECT count(*)::int AS n FROM revisions`);
-    const start = await curator.agent.post('/api/v1/imports?target=in_review').set(W).attach('file', Buffer.from(file), 'bulk.jdx').expect(202);
-    const id = start.body.job.id;
-    let job = start.body.job;
-    let results = [];
-    for (let i = 0; i < 50 && job.status === 'running'; i++) {
-      await new Promise((r) => setTimeout(r, 100));
-      const got = (await curator.agent.get(`/api/v1/imports/${id}`).expect(200)).body;
-      job = got.job;
-      results = got.results;
-    }
-    expect(job).toMatchObject({ status: 'done', total: 3, imported: 2, rejected: 1 });
-    expect(results[1]).toMatchObject({ block: 2, status: 'rejected' });
-    expect(results[1].reason).toMatch(/formula/);
-    const after = await ctx.ds.query(`SELECT count(*)::int AS n FROM revisions`);
-    expect(after[0].n - before[0].n).toBe(2);
-    const accessions = results.filter((r: { status: string }) => r.status === 'imported').map((r: { accession: string }) => r.accession);
-    const states = await ctx.ds.query(
-      `SELECT r.state FROM revisions r JOIN entries e ON e.id = r.entry_id WHERE e.accession = ANY($1) ORDER BY e.accession`,
-      [accessions],
-    );
-    expect(states.map((s: { state: string }) => s.state)).toEqual(['in_review', 'in_review']);
-  });
-});
-
 describe('outbox and audit', () => {
   it('admins read the outbox, curators the audit log; readers neither', async () => {
     const admin = await signInAs(ctx, 'admin');

@@ -1,97 +1,83 @@
 import type { DataSource } from 'typeorm';
 import type { Logger } from 'pino';
-import { ZodError } from 'zod';
-import { RevisionContentSchema } from '@ionfolio/contracts';
-import { AppError, notFound } from '../../shared/app-error';
+import { notFound } from '../../shared/app-error';
 import { recordAudit } from '../audit/audit.service';
 import type { SessionUser } from '../users/users.schemas';
-import { createEntry } from '../entries/entries.service';
 import type { UploadedBlock } from '../uploads/spectrum-file';
+import { CHUNK_BLOCKS, importChunk, prepareChunk } from './import-chunk';
+import type { ImportTarget } from './import-writer';
+import { workerPreparer } from './prepare-pool';
 
-export interface ImportResult {
-  block: number;
-  title: string;
-  status: 'imported' | 'rejected';
-  accession?: string;
-  reason?: string;
-}
+export type { ImportResult } from './import-block';
 
-function blockContent(b: UploadedBlock) {
-  return RevisionContentSchema.parse({
-    name: b.title.trim() || `Block ${b.index}`,
-    formula: b.formula ?? '',
-    peaks: b.peaks,
-    conditions: {
-      ionizationEnergyEv: b.ionizationEnergyEv ?? 70,
-      ...(b.spectrometerType ? { instrumentType: b.spectrometerType.slice(0, 120) } : {}),
-      ...(b.inlet ? { inlet: b.inlet.slice(0, 120) } : {}),
-    },
-    retentionIndex: b.retentionIndex !== undefined ? { value: b.retentionIndex, column: 'non-polar' } : null,
-    casRn: b.casRn ?? null,
-    changeNote: 'Bulk import',
-  });
-}
-
-const reasonOf = (err: unknown) =>
-  err instanceof ZodError
-    ? err.issues.map((i) => `${i.path.join('.') || 'block'}: ${i.message}`).join('; ')
-    : err instanceof AppError
-      ? err.message
-      : 'could not be stored';
-
-/** Starts a bulk import job; blocks are written one transaction each, so a bad block writes nothing. */
+/**
+ * Starts a bulk import job. A bad block is rejected with its reason and writes nothing; the good
+ * ones are written a chunk per transaction (see import-chunk.ts).
+ */
 export async function startImport(
   ds: DataSource,
   log: Logger,
   actor: SessionUser,
   fileName: string,
   blocks: UploadedBlock[],
-  target: 'draft' | 'in_review',
+  target: ImportTarget,
 ) {
   const rows: { id: string }[] = await ds.query(
     `INSERT INTO import_jobs (created_by, file_name, target, status, total) VALUES ($1, $2, $3, 'running', $4) RETURNING id`,
     [actor.id, fileName, target, blocks.length],
   );
   const id = rows[0]!.id;
-  void runImport(ds, actor, id, blocks, target).catch(async (err: unknown) => {
+  void runImport(ds, log, actor, id, blocks, target).catch(async (err: unknown) => {
     log.error({ err, job: id }, 'import failed');
-    await ds.query(`UPDATE import_jobs SET status = 'failed', error = $2, finished_at = now() WHERE id = $1`, [id, 'the import stopped unexpectedly']).catch(() => undefined);
+    await ds
+      .query(`UPDATE import_jobs SET status = 'failed', error = $2, finished_at = now() WHERE id = $1`, [
+        id,
+        'the import stopped unexpectedly',
+      ])
+      .catch(() => undefined);
   });
   return getImport(ds, actor, id);
 }
 
-async function runImport(ds: DataSource, actor: SessionUser, id: string, blocks: UploadedBlock[], target: 'draft' | 'in_review') {
-  const results: ImportResult[] = [];
-  let imported = 0;
-  for (const [i, b] of blocks.entries()) {
-    try {
-      const content = blockContent(b);
-      const accession = await ds.transaction(async (m) => {
-        const view = await createEntry(ds, actor, content, { manager: m });
-        if (target === 'in_review') {
-          await m.query(`UPDATE revisions SET state = 'in_review', submitted_at = now(), lock_version = lock_version + 1 WHERE id = $1`, [view.id]);
-          await recordAudit(m, { actorId: actor.id, action: 'revision.submitted', subjectType: 'revision', subjectId: view.label, data: { from: 'draft', to: 'in_review', import: id } });
-        }
-        return view.accession;
-      });
-      imported++;
-      results.push({ block: b.index, title: b.title, status: 'imported', accession });
-    } catch (err) {
-      results.push({ block: b.index, title: b.title, status: 'rejected', reason: reasonOf(err) });
+/**
+ * Checks the blocks and writes them chunk by chunk, each chunk in one transaction; the next chunk
+ * is checked (on worker threads when the file has more than one chunk) while the previous one is
+ * being written.
+ */
+async function runImport(
+  ds: DataSource,
+  log: Logger,
+  actor: SessionUser,
+  id: string,
+  blocks: UploadedBlock[],
+  target: ImportTarget,
+) {
+  const job = { ds, log, actor, id, target };
+  const progress = { done: 0, imported: 0 };
+  const preparer = blocks.length > CHUNK_BLOCKS ? workerPreparer(log, prepareChunk) : undefined;
+  const chunkAt = (start: number) => {
+    const chunk = blocks.slice(start, start + CHUNK_BLOCKS);
+    return preparer ? preparer.prepare(chunk) : prepareChunk(chunk);
+  };
+  try {
+    let next = chunkAt(0);
+    for (let start = 0; start < blocks.length; start += CHUNK_BLOCKS) {
+      const prepared = await next;
+      if (start + CHUNK_BLOCKS < blocks.length) next = chunkAt(start + CHUNK_BLOCKS);
+      await importChunk(job, prepared, progress);
     }
-    if ((i + 1) % 10 === 0 || i === blocks.length - 1) {
-      await ds.query(`UPDATE import_jobs SET done = $2, imported = $3, rejected = $4, results = $5 WHERE id = $1`, [
-        id,
-        i + 1,
-        imported,
-        i + 1 - imported,
-        JSON.stringify(results),
-      ]);
-    }
+  } finally {
+    await preparer?.close();
   }
   await ds.transaction(async (m) => {
     await m.query(`UPDATE import_jobs SET status = 'done', finished_at = now() WHERE id = $1`, [id]);
-    await recordAudit(m, { actorId: actor.id, action: 'import.finished', subjectType: 'import', subjectId: id, data: { total: blocks.length, imported } });
+    await recordAudit(m, {
+      actorId: actor.id,
+      action: 'import.finished',
+      subjectType: 'import',
+      subjectId: id,
+      data: { total: blocks.length, imported: progress.imported },
+    });
   });
 }
 
@@ -103,7 +89,8 @@ export async function getImport(ds: DataSource, viewer: SessionUser, id: string)
     [id],
   );
   const row = rows[0];
-  if (!row || (row.createdBy !== viewer.id && viewer.role !== 'admin' && viewer.role !== 'curator')) throw notFound(`Import ${id}`);
+  if (!row || (row.createdBy !== viewer.id && viewer.role !== 'admin' && viewer.role !== 'curator'))
+    throw notFound(`Import ${id}`);
   const { results, createdBy: _c, ...job } = row;
   return { job, results };
 }
