@@ -50,8 +50,19 @@ function component(pattern: Float64Array, j: number, k: number): number {
  */
 export function fitPattern(observed: Float64Array, pattern: Float64Array, noise: NoiseModel): PatternFit {
   const points = observed.length;
-  const coef = [(observed[LEAD_DA] ?? 0) / (pattern[0] || 1), 0, 0];
-  const model = (k: number): number => (coef[0] as number) * component(pattern, 0, k) + (coef[1] as number) * component(pattern, 1, k) + (coef[2] as number) * component(pattern, 2, k);
+  // The pattern at each position for M, M−1 and M−2 (component(pattern, j, k)), read once.
+  const p0 = new Float64Array(points);
+  const p1 = new Float64Array(points);
+  const p2 = new Float64Array(points);
+  const columns = [p0, p1, p2];
+  for (let k = 0; k < points; k += 1) {
+    p0[k] = component(pattern, 0, k);
+    p1[k] = component(pattern, 1, k);
+    p2[k] = component(pattern, 2, k);
+  }
+  const coef = Float64Array.of((observed[LEAD_DA] ?? 0) / (pattern[0] || 1), 0, 0);
+  const model = (k: number): number =>
+    (coef[0] as number) * (p0[k] as number) + (coef[1] as number) * (p1[k] as number) + (coef[2] as number) * (p2[k] as number);
   const weights = new Float64Array(points);
   for (let round = 0; round < 3; round += 1) {
     for (let k = 0; k < points; k += 1) {
@@ -60,10 +71,11 @@ export function fitPattern(observed: Float64Array, pattern: Float64Array, noise:
     }
     for (let sweep = 0; sweep < 6; sweep += 1) {
       for (let j = 0; j < 3; j += 1) {
+        const column = columns[j] as Float64Array;
         let numerator = 0;
         let denominator = 0;
         for (let k = 0; k < points; k += 1) {
-          const p = component(pattern, j, k);
+          const p = column[k] as number;
           if (p === 0) continue;
           const rest = model(k) - (coef[j] as number) * p;
           numerator += (weights[k] as number) * ((observed[k] as number) - rest) * p;

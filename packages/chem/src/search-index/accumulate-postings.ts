@@ -52,7 +52,25 @@ export function accumulateCosine(lists: PostingLists, acc: Accumulators, mz: num
 }
 
 /**
- * Weighted dot product and composite ratio term. With W = mz³·q on both sides,
+ * Forward weighted dot product (and composite, whose ratio term the bounds take as 0…1):
+ * sum += (mz³·W_U)·q_L = W_U·W_L. Nothing else, so the loop is a load, a multiply-add and a count;
+ * `sum` must be 0 for untouched slots (the index clears it after each search).
+ * @example
+ * accumulateDot(lists, acc, 43, 43 ** 3 * 43 ** 3 * 15.8);
+ */
+export function accumulateDot(lists: PostingLists, acc: Accumulators, mz: number, factor: number): void {
+  const { slots, weights } = lists;
+  const { count, sum } = acc;
+  const end = lists.offsets[mz + 1] as number;
+  for (let p = lists.offsets[mz] as number; p < end; p++) {
+    const slot = slots[p] as number;
+    sum[slot] = (sum[slot] as number) + factor * (weights[p] as number);
+    count[slot] = (count[slot] as number) + 1;
+  }
+}
+
+/**
+ * Reverse weighted dot product and composite ratio term. With W = mz³·q on both sides,
  * sum += (mz⁶·q_U)·q_L = W_U·W_L; ratio r = q_L / q_U (mz³ cancels); queryNormSq += W_U².
  * @example
  * accumulateWeighted(lists, acc, 43, 43 ** 3 * 15.8);

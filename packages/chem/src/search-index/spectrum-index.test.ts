@@ -167,6 +167,23 @@ describe('SpectrumIndex', () => {
     expect(memory.indexBytes / memory.peakCount).toBeLessThanOrEqual(16);
   });
 
+  it('lists the matched peaks of a hit exactly as compareSpectra does from the original peaks', () => {
+    const library = simulatedLibrary(200, 11);
+    const index = new SpectrumIndex();
+    library.forEach((peaks, id) => index.add(id, peaks));
+    const random = seededRandom(12);
+    for (let i = 0; i < 20; i++) {
+      const source = Math.floor(random() * library.length);
+      const query = simulatedReplicate(library[source] as Peak[], random);
+      for (const hit of index.search(query, { k: 3 })) {
+        const expected = compareSpectra(query, library[hit.id] as Peak[]).matchedPeaks;
+        expect(index.matchedPeaks(query, hit.id)).toEqual(expected);
+        expect(expected.length).toBe(hit.matchedPeakCount);
+      }
+    }
+    expect(() => index.matchedPeaks([[43, 100]], 999)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', field: 'id' }));
+  });
+
   it('does not mutate the spectra it is given', () => {
     const index = new SpectrumIndex();
     const peaks = [[58.2, 25], [43, 1000]] as const;

@@ -1,5 +1,6 @@
 import {
   accumulateCosine,
+  accumulateDot,
   accumulateEntropy,
   accumulateWeighted,
   type Accumulators,
@@ -20,9 +21,10 @@ import {
 } from './search-options';
 import { selectTopHits } from './select-top-hits';
 import { ChemError } from '../errors/chem-error';
+import { matchedPeaks } from '../similarity/compare-spectra';
 import { entropyWeights } from '../similarity/entropy-similarity';
 import { scoreSpectrumViews } from '../similarity/score-spectrum-views';
-import { assertSimilarityMethod, type SimilarityMethod } from '../similarity/similarity-method';
+import { assertSimilarityMethod, type MatchedPeak, type SimilarityMethod } from '../similarity/similarity-method';
 import { prepareSpectrum, type SpectrumView } from '../similarity/spectrum-view';
 import { STEIN_SCOTT_INTENSITY_POWER } from '../similarity/weighted-dot-product';
 import { MAX_MZ } from '../spectrum/validate-peaks';
@@ -326,8 +328,23 @@ export class SpectrumIndex {
       });
     } finally {
       scratch.count.fill(0, 0, this.slotCount);
+      scratch.sum.fill(0, 0, this.slotCount);
       scratch.checked.fill(0, 0, this.slotCount);
     }
+  }
+
+  /**
+   * The peaks a query shares with one indexed spectrum, as {@link compareSpectra} lists them: the index
+   * keeps each spectrum's normalised peaks, so a caller need not keep a copy to explain a hit.
+   * @throws {ChemError} `INVALID_ARGUMENT` (field `id`) when the id is not in the index; `INVALID_PEAKS` /
+   *   `EMPTY_SPECTRUM` (fields `query…`) for a bad query.
+   * @example
+   * index.matchedPeaks([[43, 90], [58, 30]], 1); // [{ mz: 43, … }, { mz: 58, … }]
+   */
+  matchedPeaks(query: PeakList, id: number): MatchedPeak[] {
+    const slot = this.slotById.get(id);
+    if (slot === undefined) throw new ChemError('INVALID_ARGUMENT', `id ${id} is not in the index`, { field: 'id' });
+    return matchedPeaks(prepareSpectrum(query, 'query'), this.viewOf(slot));
   }
 
   private passes(slot: number, search: ResolvedSearch): boolean {
@@ -364,7 +381,10 @@ export class SpectrumIndex {
       const probability = Math.exp(queryEntropy.exponent * Math.log(u)) / queryEntropy.total;
       for (const tier of tiers) {
         if (search.method === 'cosine') accumulateCosine(tier, acc, mz, u);
-        else if (search.method === 'weighted' || search.method === 'composite') accumulateWeighted(tier, acc, mz, w, q);
+        else if (search.method === 'weighted' || search.method === 'composite') {
+          if (search.reverse) accumulateWeighted(tier, acc, mz, w, q);
+          else accumulateDot(tier, acc, mz, w * mz * mz * mz);
+        }
         else accumulateEntropy(tier, acc, mz, probability, slotWeights, search.reverse);
       }
     }
