@@ -1,4 +1,4 @@
-import { compareSpectra, readMolecularIon, type MolecularIonReading, type PeakList, type SpectrumSearchOptions } from '@ionfolio/chem';
+import { readMolecularIon, type MolecularIonReading, type PeakList, type SpectrumSearchOptions } from '@ionfolio/chem';
 import { IDENTIFY_CAUTION } from './caution';
 import { withChemErrors } from './chem-errors';
 import { maskOf } from './element-mask';
@@ -37,7 +37,7 @@ export function searchCandidates(
   const hits = withChemErrors(() => library.index.search(peaks, indexOptions(options, k, library, ri)), path);
   return hits.map((hit) => {
     const meta = library.meta(hit.id);
-    const { matchedPeaks } = compareSpectra(peaks, meta.peaks, { method: options.method });
+    const matchedPeaks = library.matchedPeaks(peaks, hit.id);
     return {
       accession: meta.accession,
       revision: meta.revision,

@@ -1,4 +1,4 @@
-import { SpectrumIndex, type PeakList } from '@ionfolio/chem';
+import { SpectrumIndex, type MatchedPeak, type PeakList } from '@ionfolio/chem';
 import { formulaMask } from './element-mask';
 
 /** One published (or edition member) revision as the search needs it. */
@@ -13,7 +13,8 @@ export interface LibraryRevision {
   retentionIndexColumn: string | null;
 }
 
-export type CandidateMeta = Omit<LibraryRevision, 'peaks'> & { peaks: PeakList };
+/** What the API says about a hit besides its score; the peaks stay in the index only. */
+export type CandidateMeta = Omit<LibraryRevision, 'peaks'>;
 
 /**
  * A {@link SpectrumIndex} over library revisions with what the API must say about each hit. The
@@ -24,6 +25,8 @@ export interface LibraryIndex {
   readonly index: SpectrumIndex;
   readonly size: number;
   meta(id: number): CandidateMeta;
+  /** The peaks the query shares with the hit `id`, as compareSpectra lists them. */
+  matchedPeaks(query: PeakList, id: number): MatchedPeak[];
   /** Adds the revision, replacing whatever revision of the same entry was there. */
   put(revision: LibraryRevision): void;
   /** Removes the entry's revision; true if there was one. */
@@ -31,8 +34,8 @@ export interface LibraryIndex {
   has(accession: string, revision?: number): boolean;
 }
 
-export function createLibraryIndex(revisions: Iterable<LibraryRevision> = []): LibraryIndex {
-  const index = new SpectrumIndex();
+function emptyLibraryIndex(reserve?: { spectra: number; peaks: number }): LibraryIndex {
+  const index = new SpectrumIndex(reserve && { reserve });
   const metaById = new Map<number, CandidateMeta>();
   const idByAccession = new Map<string, number>();
   let nextId = 1;
@@ -47,15 +50,19 @@ export function createLibraryIndex(revisions: Iterable<LibraryRevision> = []): L
       if (!meta) throw new Error(`library index: no revision for id ${id}`);
       return meta;
     },
+    matchedPeaks(query, id) {
+      return index.matchedPeaks(query, id);
+    },
     put(revision) {
       library.remove(revision.accession);
       const id = nextId++;
-      index.add(id, revision.peaks, {
-        nominalMass: revision.nominalMass,
-        retentionIndex: revision.retentionIndex ?? undefined,
-        elementsMask: formulaMask(revision.formula),
+      const { peaks, ...meta } = revision;
+      index.add(id, peaks, {
+        nominalMass: meta.nominalMass,
+        retentionIndex: meta.retentionIndex ?? undefined,
+        elementsMask: formulaMask(meta.formula),
       });
-      metaById.set(id, revision);
+      metaById.set(id, meta);
       idByAccession.set(revision.accession, id);
     },
     remove(accession) {
@@ -71,7 +78,27 @@ export function createLibraryIndex(revisions: Iterable<LibraryRevision> = []): L
       return id !== undefined && (revision === undefined || metaById.get(id)?.revision === revision);
     },
   };
+  return library;
+}
+
+/** An index over these revisions, packed. */
+export function createLibraryIndex(revisions: Iterable<LibraryRevision> = []): LibraryIndex {
+  const library = emptyLibraryIndex();
   for (const revision of revisions) library.put(revision);
-  index.pack();
+  library.index.pack();
+  return library;
+}
+
+/**
+ * An index filled page by page (each page's rows can be collected as soon as they are added), with
+ * room reserved up front so that the typed arrays are not regrown on the way; packed at the end.
+ */
+export async function loadLibraryIndex(
+  pages: AsyncIterable<LibraryRevision[]>,
+  reserve?: { spectra: number; peaks: number },
+): Promise<LibraryIndex> {
+  const library = emptyLibraryIndex(reserve);
+  for await (const page of pages) for (const revision of page) library.put(revision);
+  library.index.pack();
   return library;
 }

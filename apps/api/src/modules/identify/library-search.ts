@@ -1,9 +1,9 @@
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { AppError } from '../../shared/app-error';
-import { createLibraryIndex, type LibraryIndex } from './library-index';
+import { createLibraryIndex, loadLibraryIndex, type LibraryIndex } from './library-index';
 import { listenForLibraryChanges, type LibraryChange, type LibraryListener } from './library-listener';
-import { loadEditionRevisions, loadPublishedRevision, loadPublishedRevisions } from './library.repository';
+import { countPublished, loadEditionRevisions, loadPublishedRevision, publishedRevisionPages } from './library.repository';
 
 /** Editions are frozen, so an edition's index never goes stale; a few stay cached. */
 const EDITION_CACHE_SIZE = 4;
@@ -39,8 +39,9 @@ export function createLibrarySearch(options: { ds: DataSource; databaseUrl: stri
 
   async function reloadAll(): Promise<void> {
     const t0 = performance.now();
-    const rows = await loadPublishedRevisions(ds);
-    current = createLibraryIndex(rows);
+    // Changes that arrive meanwhile wait in the queue, so the count may only run short of the pages.
+    const reserve = await countPublished(ds);
+    current = await loadLibraryIndex(publishedRevisionPages(ds), reserve);
     logger.info({ revisions: current.size, ms: Math.round(performance.now() - t0) }, 'library index loaded');
   }
 
