@@ -70,6 +70,29 @@ export function accumulateDot(lists: PostingLists, acc: Accumulators, mz: number
 }
 
 /**
+ * The composite ratio term alone, for a second pass after {@link accumulateDot}: with r = q_L / q_U,
+ * ratioSum += min(r / r_prev, r_prev / r) from the second shared peak on. `ratioSum` and `lastRatio`
+ * must be 0 for every slot on entry (r_prev = 0 then adds 0/r = 0). Only slots marked in `only` are
+ * accumulated (the others' bounds already rule them out).
+ * @example
+ * accumulateRatio(lists, acc, 43, 15.8, candidates);
+ */
+export function accumulateRatio(lists: PostingLists, acc: Accumulators, mz: number, queryQ: number, only: Uint8Array): void {
+  const { slots, weights } = lists;
+  const { ratioSum, lastRatio } = acc;
+  const inverseQueryQ = 1 / queryQ;
+  const end = lists.offsets[mz + 1] as number;
+  for (let p = lists.offsets[mz] as number; p < end; p++) {
+    const slot = slots[p] as number;
+    if (only[slot] === 0) continue;
+    const ratio = (weights[p] as number) * inverseQueryQ;
+    const previous = lastRatio[slot] as number;
+    ratioSum[slot] = (ratioSum[slot] as number) + (ratio < previous ? ratio / previous : previous / ratio);
+    lastRatio[slot] = ratio;
+  }
+}
+
+/**
  * Reverse weighted dot product and composite ratio term. With W = mz³·q on both sides,
  * sum += (mz⁶·q_U)·q_L = W_U·W_L; ratio r = q_L / q_U (mz³ cancels); queryNormSq += W_U².
  * @example

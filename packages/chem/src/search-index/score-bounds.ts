@@ -22,14 +22,15 @@ export interface QueryTotals {
 /** Per-slot library sums stored by the index (Float32). */
 export interface SlotNorms {
   cosineNormSq: Float32Array;
-  weightedNormSq: Float32Array;
+  weightedNormSq: Float64Array;
 }
 
 /**
  * Turns the posting sums into an upper and a lower bound of every touched slot's exact score
  * (untouched: upper = −1). The forward composite score (N·f1 + n·f2)/(N + n), N query peaks and n
  * shared, gets f2 ∈ [0, 1] as its interval: the posting pass then needs no division per posting, and
- * only the few spectra whose upper bound reaches the k-th best score are scored exactly. The reverse entropy score has no cheap estimate: its bound is
+ * usually only a few hundred spectra whose upper bound reaches the k-th best score are scored exactly;
+ * with `forwardRatioKnown` (a second pass accumulated f2 too) the bounds are tight. The reverse entropy score has no cheap estimate: its bound is
  * sqrt(Σ shared library probability) — since each term (p+q)ln(p+q) − p ln p − q ln q ≤ ln 4·sqrt(p·q)
  * (equality at p = q) and Σ p over the kept query peaks is 1, Cauchy–Schwarz gives it — and its lower
  * bound is 0.
@@ -45,6 +46,7 @@ export function computeScoreBounds(
   totals: QueryTotals,
   upper: Float64Array,
   lower: Float64Array,
+  forwardRatioKnown = false,
 ): void {
   const { count, sum, queryNormSq, ratioSum } = acc;
   for (let slot = 0; slot < slotCount; slot++) {
@@ -62,17 +64,16 @@ export function computeScoreBounds(
       const queryNorm = reverse ? (queryNormSq[slot] as number) : totals.weightedNormSq;
       estimate = Math.min(1, (dot * dot) / (queryNorm * (norms.weightedNormSq[slot] as number)));
       if (method === 'composite' && shared >= 2) {
-        if (!reverse) {
-          // Forward: the ratio term f2 is not accumulated; it lies in [0, 1], which bounds the score.
-          const queryPeaks = totals.peakCount;
+        const queryPeaks = reverse ? shared : totals.peakCount;
+        if (!reverse && !forwardRatioKnown) {
+          // Forward, first pass: the ratio term f2 is not accumulated; it lies in [0, 1], which bounds the score.
           const denominator = queryPeaks + shared;
           upper[slot] = ((queryPeaks * estimate + shared) / denominator) * (1 + BOUND_MARGIN) + ABSOLUTE_MARGIN;
           lower[slot] = ((queryPeaks * estimate) / denominator) * (1 - BOUND_MARGIN) - ABSOLUTE_MARGIN;
           continue;
         }
         const f2 = (ratioSum[slot] as number) / (shared - 1);
-        // Reverse: the query side counts only the shared peaks, so the score is the mean of f1 and f2.
-        estimate = (estimate + f2) / 2;
+        estimate = (queryPeaks * estimate + shared * f2) / (queryPeaks + shared);
       }
     } else if (!reverse) {
       estimate = dot / LN4;

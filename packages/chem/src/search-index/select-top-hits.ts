@@ -18,6 +18,11 @@ export interface TopHitInput {
   idOf: (slot: number) => number;
   passes: (slot: number) => boolean;
   exactScore: (slot: number) => number;
+  /**
+   * Most exact scores to spend; past it the selection gives up, returns undefined and leaves in
+   * `floor` a score the k-th best hit is known to reach (−Infinity when fewer than k were scored).
+   */
+  budget?: { limit: number; floor: number };
 }
 
 const BUCKETS = 1024;
@@ -62,7 +67,7 @@ function replaceHeapTop(heap: Float64Array, size: number, value: number): void {
  * @example
  * selectTopHits(input); // [{ slot, id, score }, ...]
  */
-export function selectTopHits(input: TopHitInput): SlotHit[] {
+export function selectTopHits(input: TopHitInput): SlotHit[] | undefined {
   const { slotCount, upper, lower, checked, k, passes } = input;
   const heap = new Float64Array(k);
   let heapSize = 0;
@@ -104,6 +109,8 @@ export function selectTopHits(input: TopHitInput): SlotHit[] {
 
   const hits: SlotHit[] = [];
   let position = 0;
+  let spent = 0;
+  const budget = input.budget?.limit ?? Infinity;
   for (let b = BUCKETS; b >= 0; b--) {
     const end = position + (bucketSizes[b] as number);
     if (hits.length === k && (hits[k - 1] as SlotHit).score > (b + 1) / BUCKETS && b < BUCKETS) break;
@@ -111,6 +118,11 @@ export function selectTopHits(input: TopHitInput): SlotHit[] {
       const slot = ordered[position] as number;
       const worst = hits.length === k ? (hits[k - 1] as SlotHit) : undefined;
       if (worst !== undefined && (upper[slot] as number) < worst.score) continue;
+      if (++spent > budget) {
+        const kth = hits.length === k ? (hits[k - 1] as SlotHit).score : -Infinity;
+        input.budget!.floor = Math.max(floor, kth);
+        return undefined;
+      }
       const score = input.exactScore(slot);
       if (!(score > 0)) continue;
       const hit = { slot, id: input.idOf(slot), score };

@@ -167,6 +167,26 @@ describe('SpectrumIndex', () => {
     expect(memory.indexBytes / memory.peakCount).toBeLessThanOrEqual(16);
   });
 
+  it('stays exact when thousands of spectra share every peak with the query (the composite second pass)', () => {
+    // 4,000 spectra on the same 40 m/z with random intensities: the first, loose bounds of a forward
+    // composite search (ratio term anywhere in [0, 1]) leave nearly all in play, past the exact-score
+    // budget, so the search accumulates the ratio term in a second pass.
+    const random = seededRandom(31);
+    const mzs = Array.from({ length: 40 }, (_, i) => 40 + 7 * i);
+    const spectrum = (): Peak[] => mzs.map((mz) => [mz, 1 + 99 * random()]);
+    const entries: Entry[] = Array.from({ length: 4000 }, (_, id) => ({ id, peaks: spectrum(), meta: {} }));
+    const index = new SpectrumIndex();
+    for (const e of entries) index.add(e.id, e.peaks);
+    for (let i = 0; i < 3; i++) {
+      const query = spectrum();
+      for (const k of [1, 10, 50]) {
+        expect(index.search(query, { method: 'composite', k })).toEqual(searchOneByOne(entries, query, { method: 'composite', k }));
+      }
+      const even = (id: number) => id % 2 === 0;
+      expect(index.search(query, { method: 'composite', filter: even })).toEqual(searchOneByOne(entries, query, { method: 'composite', filter: even }));
+    }
+  });
+
   it('lists the matched peaks of a hit exactly as compareSpectra does from the original peaks', () => {
     const library = simulatedLibrary(200, 11);
     const index = new SpectrumIndex();

@@ -2,6 +2,7 @@ import {
   accumulateCosine,
   accumulateDot,
   accumulateEntropy,
+  accumulateRatio,
   accumulateWeighted,
   type Accumulators,
   type EntropySlotWeights,
@@ -19,18 +20,23 @@ import {
   type SpectrumMeta,
   type SpectrumSearchOptions,
 } from './search-options';
-import { selectTopHits } from './select-top-hits';
+import { selectTopHits, type SlotHit } from './select-top-hits';
 import { ChemError } from '../errors/chem-error';
 import { matchedPeaks } from '../similarity/compare-spectra';
 import { entropyWeights } from '../similarity/entropy-similarity';
 import { scoreSpectrumViews } from '../similarity/score-spectrum-views';
 import { assertSimilarityMethod, type MatchedPeak, type SimilarityMethod } from '../similarity/similarity-method';
 import { prepareSpectrum, type SpectrumView } from '../similarity/spectrum-view';
-import { STEIN_SCOTT_INTENSITY_POWER } from '../similarity/weighted-dot-product';
+import { peakWeight, sharedSums } from '../similarity/aligned-sums';
+import { compositeFromSums } from '../similarity/composite-similarity';
+import { STEIN_SCOTT_INTENSITY_POWER, STEIN_SCOTT_MZ_POWER, weightedFromSums } from '../similarity/weighted-dot-product';
 import { MAX_MZ } from '../spectrum/validate-peaks';
 import type { PeakList } from '../types';
 
 const OFFSET_COUNT = MAX_MZ + 2;
+// Exact scores (a few µs each) a forward composite search spends on its first, loose bounds before it
+// pays for the second posting pass that tightens them (about as long as a few thousand exact scores).
+const EXACT_SCORE_BUDGET = 3000;
 // ln I of the peaks of the spectrum being added (a nominal spectrum has at most MAX_MZ peaks).
 const LN_SCRATCH = new Float64Array(MAX_MZ + 1);
 
@@ -44,7 +50,8 @@ interface SlotColumns {
   retentionIndex: Float32Array;
   elementsMask: Uint32Array;
   cosineNormSq: Float32Array;
-  weightedNormSq: Float32Array;
+  /** Σ W² over the spectrum's peaks in m/z order, in Float64: exactly the library norm of the exact scorer. */
+  weightedNormSq: Float64Array;
   entropyExponent: Float32Array;
   entropyLnTotal: Float32Array;
   plainLnTotal: Float32Array;
@@ -60,7 +67,7 @@ function emptySlotColumns(): SlotColumns {
     retentionIndex: new Float32Array(0),
     elementsMask: new Uint32Array(0),
     cosineNormSq: new Float32Array(0),
-    weightedNormSq: new Float32Array(0),
+    weightedNormSq: new Float64Array(0),
     entropyExponent: new Float32Array(0),
     entropyLnTotal: new Float32Array(0),
     plainLnTotal: new Float32Array(0),
@@ -214,6 +221,7 @@ export class SpectrumIndex {
       const relIntensity = view.relIntensity[i] as number;
       const lnI = Math.log(relIntensity);
       const q = Math.exp(STEIN_SCOTT_INTENSITY_POWER * lnI);
+      // The very operations of peakWeight(mz, I, 3, 0.6): weightedNormSq is the exact scorer's norm.
       const w = mz * mz * mz * q;
       this.peakMz[base + i] = mz;
       this.peakRelIntensity[base + i] = relIntensity;
@@ -309,17 +317,38 @@ export class SpectrumIndex {
     try {
       const totals = this.accumulate(queryView, search, scratch);
       const norms = { cosineNormSq: this.slot.cosineNormSq, weightedNormSq: this.slot.weightedNormSq };
+      const select = (budget?: { limit: number; floor: number }): SlotHit[] | undefined =>
+        selectTopHits({
+          slotCount: this.slotCount,
+          upper: scratch.upper,
+          lower: scratch.lower,
+          checked: scratch.checked,
+          k: search.k,
+          idOf: (slot) => this.slot.ids[slot] as number,
+          passes: (slot) => this.passes(slot, search),
+          exactScore: this.exactScorer(queryView, search),
+          budget,
+        });
       computeScoreBounds(search.method, search.reverse, scratch, this.slotCount, norms, totals, scratch.upper, scratch.lower);
-      const hits = selectTopHits({
-        slotCount: this.slotCount,
-        upper: scratch.upper,
-        lower: scratch.lower,
-        checked: scratch.checked,
-        k: search.k,
-        idOf: (slot) => this.slot.ids[slot] as number,
-        passes: (slot) => this.passes(slot, search),
-        exactScore: (slot) => scoreSpectrumViews(queryView, this.viewOf(slot), search.method, search.reverse),
-      });
+      let hits: SlotHit[] | undefined;
+      if (search.method === 'composite' && !search.reverse) {
+        // The [0, 1] interval of the ratio term leaves a few hundred spectra to score exactly for most
+        // queries, but tens of thousands when many spectra share many peaks with the query: past a
+        // budget, a second pass over the same postings accumulates the ratio term and tightens the bounds.
+        const budget = { limit: EXACT_SCORE_BUDGET, floor: -Infinity };
+        hits = select(budget);
+        if (hits === undefined) {
+          // Only spectra whose loose upper bound reaches a score the k-th hit already has can still be in.
+          const candidates = scratch.checked;
+          const { upper } = scratch;
+          for (let slot = 0; slot < this.slotCount; slot++) candidates[slot] = (upper[slot] as number) >= budget.floor ? 1 : 0;
+          this.accumulateRatioTerm(queryView, scratch, candidates);
+          computeScoreBounds('composite', false, scratch, this.slotCount, norms, totals, upper, scratch.lower, true);
+          for (let slot = 0; slot < this.slotCount; slot++) if (candidates[slot] === 0) upper[slot] = -1;
+          candidates.fill(0, 0, this.slotCount);
+        }
+      }
+      hits ??= select() ?? []; // without a budget select always answers
       return hits.map((hit) => {
         const matchedPeakCount = scratch.count[hit.slot] as number;
         if (!search.reverse) return { id: hit.id, score: hit.score, matchedPeakCount };
@@ -345,6 +374,38 @@ export class SpectrumIndex {
     const slot = this.slotById.get(id);
     if (slot === undefined) throw new ChemError('INVALID_ARGUMENT', `id ${id} is not in the index`, { field: 'id' });
     return matchedPeaks(prepareSpectrum(query, 'query'), this.viewOf(slot));
+  }
+
+  /**
+   * The exact score of one slot for this search. Forward weighted and composite scores take the
+   * query's weights (computed once) and the slot's stored exact norm, and walk only the shared
+   * peaks: the same sums in the same order as {@link scoreSpectrumViews}, so the same bits.
+   */
+  private exactScorer(queryView: SpectrumView, search: ResolvedSearch): (slot: number) => number {
+    const { method, reverse } = search;
+    if (reverse || (method !== 'weighted' && method !== 'composite')) {
+      return (slot) => scoreSpectrumViews(queryView, this.viewOf(slot), method, reverse);
+    }
+    const queryPeakCount = queryView.end - queryView.start;
+    const queryWeights = new Float64Array(queryPeakCount);
+    let queryNormSq = 0;
+    for (let i = 0; i < queryPeakCount; i++) {
+      const w = peakWeight(queryView.mz[queryView.start + i] as number, queryView.relIntensity[queryView.start + i] as number, STEIN_SCOTT_MZ_POWER, STEIN_SCOTT_INTENSITY_POWER);
+      queryWeights[i] = w;
+      queryNormSq += w * w;
+    }
+    const norms = this.slot.weightedNormSq;
+    const { start: slotStart, length: slotLength } = this.slot;
+    // One library view and one sums object, reused for every slot scored in this search.
+    const library = { mz: this.peakMz, relIntensity: this.peakRelIntensity, start: 0, end: 0 };
+    const sums = { dot: 0, sharedPeakCount: 0, ratioTermSum: 0, queryNormSq, libraryNormSq: 0 };
+    return (slot) => {
+      library.start = slotStart[slot] as number;
+      library.end = library.start + (slotLength[slot] as number);
+      sharedSums(queryView, queryWeights, library, STEIN_SCOTT_MZ_POWER, STEIN_SCOTT_INTENSITY_POWER, sums);
+      sums.libraryNormSq = norms[slot] as number;
+      return method === 'composite' ? compositeFromSums(sums, queryPeakCount) : weightedFromSums(sums);
+    };
   }
 
   private passes(slot: number, search: ResolvedSearch): boolean {
@@ -389,6 +450,17 @@ export class SpectrumIndex {
       }
     }
     return totals;
+  }
+
+  private accumulateRatioTerm(queryView: SpectrumView, acc: Accumulators, only: Uint8Array): void {
+    acc.ratioSum.fill(0, 0, this.slotCount);
+    acc.lastRatio.fill(0, 0, this.slotCount);
+    for (let i = queryView.start; i < queryView.end; i++) {
+      const mz = queryView.mz[i] as number;
+      const q = postingWeight(queryView.relIntensity[i] as number);
+      accumulateRatio(this.main, acc, mz, q, only);
+      accumulateRatio(this.delta, acc, mz, q, only);
+    }
   }
 
   private refresh(): void {

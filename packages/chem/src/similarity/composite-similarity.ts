@@ -1,4 +1,4 @@
-import { alignedSums, clampScore } from './aligned-sums';
+import { alignedSums, clampScore, type AlignedSums } from './aligned-sums';
 import type { PairwiseScoreOptions } from './cosine-similarity';
 import { prepareSpectrum, type SpectrumView } from './spectrum-view';
 import { STEIN_SCOTT_INTENSITY_POWER, STEIN_SCOTT_MZ_POWER } from './weighted-dot-product';
@@ -11,12 +11,21 @@ import type { PeakList } from '../types';
  */
 export function compositeScore(query: SpectrumView, library: SpectrumView, reverse: boolean): number {
   const sums = alignedSums(query, library, reverse, STEIN_SCOTT_MZ_POWER, STEIN_SCOTT_INTENSITY_POWER);
+  return compositeFromSums(sums, reverse ? sums.sharedPeakCount : query.end - query.start);
+}
+
+/**
+ * The composite score from its sums: f1 = dot² / (|Q|²·|L|²), f2 = ratio sum / (shared − 1),
+ * (N·f1 + n·f2) / (N + n) with N the query's peak count (the shared count in reverse mode).
+ * @example
+ * compositeFromSums(alignedSums(q, l, false, 3, 0.6), q.end - q.start);
+ */
+export function compositeFromSums(sums: AlignedSums, queryPeakCount: number): number {
   if (sums.dot === 0) return 0;
   const f1 = clampScore((sums.dot * sums.dot) / (sums.queryNormSq * sums.libraryNormSq));
   const shared = sums.sharedPeakCount;
   if (shared < 2) return f1;
   const f2 = sums.ratioTermSum / (shared - 1);
-  const queryPeakCount = reverse ? shared : query.end - query.start;
   return clampScore((queryPeakCount * f1 + shared * f2) / (queryPeakCount + shared));
 }
 

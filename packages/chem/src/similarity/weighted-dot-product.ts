@@ -1,4 +1,4 @@
-import { alignedSums, clampScore } from './aligned-sums';
+import { alignedSums, clampScore, type AlignedSums } from './aligned-sums';
 import type { PairwiseScoreOptions } from './cosine-similarity';
 import { prepareSpectrum, type SpectrumView } from './spectrum-view';
 import { ChemError } from '../errors/chem-error';
@@ -29,7 +29,15 @@ export function weightedDotProductScore(
   mzPower = STEIN_SCOTT_MZ_POWER,
   intensityPower = STEIN_SCOTT_INTENSITY_POWER,
 ): number {
-  const sums = alignedSums(query, library, reverse, mzPower, intensityPower);
+  return weightedFromSums(alignedSums(query, library, reverse, mzPower, intensityPower));
+}
+
+/**
+ * The weighted dot product from its sums: dot² / (|Q|²·|L|²).
+ * @example
+ * weightedFromSums(alignedSums(q, l, false, 3, 0.6));
+ */
+export function weightedFromSums(sums: Pick<AlignedSums, 'dot' | 'queryNormSq' | 'libraryNormSq'>): number {
   if (sums.dot === 0) return 0;
   return clampScore((sums.dot * sums.dot) / (sums.queryNormSq * sums.libraryNormSq));
 }
