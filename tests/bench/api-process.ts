@@ -95,11 +95,13 @@ export async function startApi(options: {
   probe: readonly (readonly [number, number])[];
   timeoutMs?: number;
   env?: NodeJS.ProcessEnv;
+  /** Extra node flags before the script, e.g. `--cpu-prof` (not allowed in NODE_OPTIONS). */
+  nodeArgs?: string[];
 }): Promise<ApiProcess> {
   const { databaseUrl, port, key, probe } = options;
   const baseUrl = `http://127.0.0.1:${port}`;
   const t0 = performance.now();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/main.ts'], {
+  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), '--import', 'tsx', 'apps/api/src/main.ts'], {
     cwd: ROOT,
     env: { ...apiEnv(databaseUrl, port), ...options.env },
     stdio: ['ignore', 'pipe', 'pipe'],

@@ -1,9 +1,10 @@
-import { readMolecularIon, type MolecularIonReading, type PeakList, type SpectrumSearchOptions } from '@ionfolio/chem';
+import { type MolecularIonReading, type PeakList, type SpectrumSearchOptions } from '@ionfolio/chem';
 import { IDENTIFY_CAUTION } from './caution';
-import { withChemErrors } from './chem-errors';
+import { withChemErrors, withChemErrorsAsync } from './chem-errors';
 import { maskOf } from './element-mask';
 import type { LibraryIndex } from './library-index';
 import type { LibrarySearch } from './library-search';
+import { readOnThisThread, type ReadingPool } from './reading-pool';
 import type { Candidate, IdentifyMethod, IdentifyRequest, SearchOptions } from './identify.schemas';
 
 /** Scores are 0–1 in packages/chem; the product shows 0–100 with one decimal. */
@@ -51,16 +52,9 @@ export function searchCandidates(
   });
 }
 
-/** The molecular-ion check of a query, or null when no cluster can be fitted (a RangeError in chem). */
+/** The molecular-ion check of a query, or null when no cluster can be fitted; a ChemError is a 400. */
 export function readQuery(peaks: PeakList, path = 'peaks'): MolecularIonReading | null {
-  return withChemErrors(() => {
-    try {
-      return readMolecularIon(peaks);
-    } catch (err) {
-      if (err instanceof RangeError) return null;
-      throw err;
-    }
-  }, path);
+  return withChemErrors(() => readOnThisThread(peaks), path);
 }
 
 export interface IdentifyAnswer {
@@ -73,14 +67,17 @@ export interface IdentifyAnswer {
 }
 
 /** `POST /api/v1/identify`: candidates from the current library or an edition, and the query's reading. */
-export async function identify(search: LibrarySearch, request: IdentifyRequest): Promise<IdentifyAnswer> {
+export async function identify(search: LibrarySearch, request: IdentifyRequest, readings?: ReadingPool): Promise<IdentifyAnswer> {
   const t0 = performance.now();
   const library = await search.indexFor(request.edition);
+  // The reading starts on the worker thread, then the search runs here: the request waits for the longer.
+  const reading = readings?.read(request.peaks);
+  reading?.catch(() => undefined); // a failed search answers first; the reading's error is then not needed
   const candidates = searchCandidates(library, request.peaks, request, request.limit, request.retentionIndex);
-  const reading = readQuery(request.peaks);
+  const answered = reading === undefined ? readQuery(request.peaks) : await withChemErrorsAsync(reading, 'peaks');
   return {
     candidates,
-    reading,
+    reading: answered,
     method: request.method,
     edition: request.edition ?? 'current',
     tookMs: Math.round((performance.now() - t0) * 10) / 10,

@@ -1,6 +1,7 @@
 import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
 import type { Logger } from 'pino';
+import { startModuleWorker } from '../../shared/module-worker';
 import type { UploadedBlock } from '../uploads/spectrum-file';
 import type { PreparedBlock } from './import-block';
 import type { PrepareRequest } from './prepare-worker';
@@ -13,20 +14,8 @@ export interface BlockPreparer {
   close(): Promise<void>;
 }
 
-const workerFile = new URL(
-  `./prepare-worker${import.meta.url.slice(import.meta.url.lastIndexOf('.'))}`,
-  import.meta.url,
-);
-
-/**
- * The API runs its TypeScript through tsx, which a worker thread does not inherit: a `.ts` worker
- * first registers tsx's loader, then imports the worker module.
- */
 function startWorker(): Worker {
-  if (!workerFile.pathname.endsWith('.ts')) return new Worker(workerFile);
-  // The specifier resolves from the working directory, the repository root for every command we run.
-  const boot = `import('tsx/esm/api').then((tsx) => { tsx.register(); return import(${JSON.stringify(workerFile.href)}); })`;
-  return new Worker(boot, { eval: true });
+  return startModuleWorker(new URL('./prepare-worker', import.meta.url), import.meta.url);
 }
 
 /**
