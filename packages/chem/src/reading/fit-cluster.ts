@@ -43,6 +43,35 @@ function component(pattern: Float64Array, j: number, k: number): number {
   return pattern[k - LEAD_DA + j] ?? 0;
 }
 
+/** The model at position k: coef[0]·p0[k] + coef[1]·p1[k] + coef[2]·p2[k]. */
+function modelAt(coef: Float64Array, p0: Float64Array, p1: Float64Array, p2: Float64Array, k: number): number {
+  return (coef[0] as number) * (p0[k] as number) + (coef[1] as number) * (p1[k] as number) + (coef[2] as number) * (p2[k] as number);
+}
+
+/** The weighted least-squares scale of column j with the other two scales held (never below 0). */
+function refitScale(
+  observed: Float64Array,
+  weights: Float64Array,
+  coef: Float64Array,
+  p0: Float64Array,
+  p1: Float64Array,
+  p2: Float64Array,
+  j: number,
+): number {
+  const column = j === 0 ? p0 : j === 1 ? p1 : p2;
+  const own = coef[j] as number;
+  let numerator = 0;
+  let denominator = 0;
+  for (let k = 0; k < observed.length; k += 1) {
+    const p = column[k] as number;
+    if (p === 0) continue;
+    const rest = modelAt(coef, p0, p1, p2, k) - own * p;
+    numerator += (weights[k] as number) * ((observed[k] as number) - rest) * p;
+    denominator += (weights[k] as number) * p * p;
+  }
+  return denominator > 0 ? Math.max(0, numerator / denominator) : 0;
+}
+
 /**
  * Weighted non-negative least squares of the pattern at M, M−1 and M−2 to `observed` (index 0 ↔
  * M−2), re-weighted with σ from the model, then χ². Positions beyond the pattern count as predicted
@@ -54,42 +83,27 @@ export function fitPattern(observed: Float64Array, pattern: Float64Array, noise:
   const p0 = new Float64Array(points);
   const p1 = new Float64Array(points);
   const p2 = new Float64Array(points);
-  const columns = [p0, p1, p2];
   for (let k = 0; k < points; k += 1) {
     p0[k] = component(pattern, 0, k);
     p1[k] = component(pattern, 1, k);
     p2[k] = component(pattern, 2, k);
   }
   const coef = Float64Array.of((observed[LEAD_DA] ?? 0) / (pattern[0] || 1), 0, 0);
-  const model = (k: number): number =>
-    (coef[0] as number) * (p0[k] as number) + (coef[1] as number) * (p1[k] as number) + (coef[2] as number) * (p2[k] as number);
   const weights = new Float64Array(points);
   for (let round = 0; round < 3; round += 1) {
     for (let k = 0; k < points; k += 1) {
-      const s = sigma(Math.max(observed[k] as number, model(k)), noise);
+      const s = sigma(Math.max(observed[k] as number, modelAt(coef, p0, p1, p2, k)), noise);
       weights[k] = 1 / (s * s);
     }
     for (let sweep = 0; sweep < 6; sweep += 1) {
-      for (let j = 0; j < 3; j += 1) {
-        const column = columns[j] as Float64Array;
-        let numerator = 0;
-        let denominator = 0;
-        for (let k = 0; k < points; k += 1) {
-          const p = column[k] as number;
-          if (p === 0) continue;
-          const rest = model(k) - (coef[j] as number) * p;
-          numerator += (weights[k] as number) * ((observed[k] as number) - rest) * p;
-          denominator += (weights[k] as number) * p * p;
-        }
-        coef[j] = denominator > 0 ? Math.max(0, numerator / denominator) : 0;
-      }
+      for (let j = 0; j < 3; j += 1) coef[j] = refitScale(observed, weights, coef, p0, p1, p2, j);
     }
   }
   // The fit itself weighs every position (a zero weight would let a shifted cluster grow there
   // unchecked); only the verdict forgives absent peaks the reporting threshold explains.
   let chiSquare = 0;
   for (let k = 0; k < points; k += 1) {
-    const m = model(k);
+    const m = modelAt(coef, p0, p1, p2, k);
     const o = observed[k] as number;
     if (belowDetection(o, m, noise)) continue;
     const s = sigma(Math.max(o, m), noise);
