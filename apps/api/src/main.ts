@@ -22,6 +22,7 @@ sessionPool.on('error', (err) => logger.warn({ err }, 'session pool lost a conne
 const search = createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger });
 // The library index is loaded (and LISTEN in place) before the first request is accepted.
 await search.start();
+search.readings.warm();
 const app = createApp({ env, dataSource, logger, sessionPool, search });
 const mail = createMailDispatcher(
   dataSource,

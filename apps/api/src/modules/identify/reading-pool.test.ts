@@ -28,6 +28,14 @@ describe('reading pool', () => {
     expect(String((error as ChemError).field)).toMatch(/^peaks/);
   });
 
+  it('can start its worker before the first read', async () => {
+    const warmed = createReadingPool(createLogger('silent'));
+    warmed.warm();
+    warmed.warm();
+    expect(await warmed.read(spectra[2]!)).toEqual(readOnThisThread(spectra[2]!));
+    await warmed.close();
+  });
+
   it('reads on the calling thread once closed', async () => {
     const other = createReadingPool(createLogger('silent'));
     await other.read(spectra[0]!);

@@ -26,6 +26,8 @@ export function readOnThisThread(peaks: PeakList): MolecularIonReading | null {
 /** Reads queries on a worker thread; a ChemError comes back as one, to be answered as a 400. */
 export interface ReadingPool {
   read(peaks: PeakList): Promise<MolecularIonReading | null>;
+  /** Starts the worker now, so that the first identify does not wait for it to boot. */
+  warm(): void;
   close(): Promise<void>;
 }
 
@@ -84,6 +86,9 @@ export function createReadingPool(log: Logger): ReadingPool {
         // The worker died under this request: read here instead.
         return readOnThisThread(peaks);
       });
+    },
+    warm() {
+      if (!broken) worker ??= start();
     },
     async close() {
       const w = worker;
