@@ -26,6 +26,12 @@ export function peakWeight(mz: number, relIntensity: number, mzPower: number, in
   return (mzPower === 3 ? mz * mz * mz : Math.pow(mz, mzPower)) * intensityPart;
 }
 
+/** One term of the composite ratio sum: min(r / r_prev, r_prev / r) for consecutive shared peaks. */
+function ratioTerm(ratio: number, previousRatio: number): number {
+  const term = ratio / previousRatio;
+  return term > 1 ? 1 / term : term;
+}
+
 /**
  * Walks two sorted spectra once and returns the {@link AlignedSums} every dot-product score needs.
  * Internal kernel, exported for the search index so that it scores exactly as {@link compareSpectra}.
@@ -61,10 +67,7 @@ export function alignedSums(
         queryNormSq += queryWeight * queryWeight;
         libraryNormSq += libraryWeight * libraryWeight;
         const ratio = libraryWeight / queryWeight;
-        if (sharedPeakCount > 0) {
-          const term = ratio / previousRatio;
-          ratioTermSum += term > 1 ? 1 / term : term;
-        }
+        if (sharedPeakCount > 0) ratioTermSum += ratioTerm(ratio, previousRatio);
         previousRatio = ratio;
         sharedPeakCount++;
       } else if (!reverse) {
@@ -121,10 +124,7 @@ export function sharedSums(
       j++;
       dot += queryWeight * libraryWeight;
       const ratio = libraryWeight / queryWeight;
-      if (sharedPeakCount > 0) {
-        const term = ratio / previousRatio;
-        ratioTermSum += term > 1 ? 1 / term : term;
-      }
+      if (sharedPeakCount > 0) ratioTermSum += ratioTerm(ratio, previousRatio);
       previousRatio = ratio;
       sharedPeakCount++;
     }
