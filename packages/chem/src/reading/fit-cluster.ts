@@ -38,38 +38,23 @@ function sigma(value: number, noise: NoiseModel): number {
   return noise.relative * value + noise.absolute;
 }
 
-/** Pattern value of component j (0: at M, 1: at M−1, 2: at M−2) at observed index k (index 0 ↔ M−2). */
-function component(pattern: Float64Array, j: number, k: number): number {
-  return pattern[k - LEAD_DA + j] ?? 0;
+
+function newScratch(points: number) {
+  const size = Math.max(64, points);
+  return {
+    p0: new Float64Array(size),
+    p1: new Float64Array(size),
+    p2: new Float64Array(size),
+    coef: new Float64Array(3),
+    g: new Float64Array(9),
+    b: new Float64Array(3),
+  };
 }
+let scratch = newScratch(64);
 
 /** The model at position k: coef[0]·p0[k] + coef[1]·p1[k] + coef[2]·p2[k]. */
 function modelAt(coef: Float64Array, p0: Float64Array, p1: Float64Array, p2: Float64Array, k: number): number {
   return (coef[0] as number) * (p0[k] as number) + (coef[1] as number) * (p1[k] as number) + (coef[2] as number) * (p2[k] as number);
-}
-
-/** The weighted least-squares scale of column j with the other two scales held (never below 0). */
-function refitScale(
-  observed: Float64Array,
-  weights: Float64Array,
-  coef: Float64Array,
-  p0: Float64Array,
-  p1: Float64Array,
-  p2: Float64Array,
-  j: number,
-): number {
-  const column = j === 0 ? p0 : j === 1 ? p1 : p2;
-  const own = coef[j] as number;
-  let numerator = 0;
-  let denominator = 0;
-  for (let k = 0; k < observed.length; k += 1) {
-    const p = column[k] as number;
-    if (p === 0) continue;
-    const rest = modelAt(coef, p0, p1, p2, k) - own * p;
-    numerator += (weights[k] as number) * ((observed[k] as number) - rest) * p;
-    denominator += (weights[k] as number) * p * p;
-  }
-  return denominator > 0 ? Math.max(0, numerator / denominator) : 0;
 }
 
 /**
@@ -79,24 +64,54 @@ function refitScale(
  */
 export function fitPattern(observed: Float64Array, pattern: Float64Array, noise: NoiseModel): PatternFit {
   const points = observed.length;
-  // The pattern at each position for M, M−1 and M−2 (component(pattern, j, k)), read once.
-  const p0 = new Float64Array(points);
-  const p1 = new Float64Array(points);
-  const p2 = new Float64Array(points);
+  // The pattern of the components at M, M−1 and M−2 (j = 0, 1, 2) at each observed index k (index 0 ↔
+  // M−2), pattern[k − LEAD_DA + j] or 0 outside it, read once into scratch reused by every fit (a
+  // reading makes thousands; fits never run inside one another).
+  if (scratch.p0.length < points) scratch = newScratch(points);
+  const { p0, p1, p2, coef, g, b } = scratch;
+  const length = pattern.length;
   for (let k = 0; k < points; k += 1) {
-    p0[k] = component(pattern, 0, k);
-    p1[k] = component(pattern, 1, k);
-    p2[k] = component(pattern, 2, k);
+    const at = k - LEAD_DA;
+    p0[k] = at >= 0 && at < length ? (pattern[at] as number) : 0;
+    p1[k] = at + 1 >= 0 && at + 1 < length ? (pattern[at + 1] as number) : 0;
+    p2[k] = at + 2 >= 0 && at + 2 < length ? (pattern[at + 2] as number) : 0;
   }
-  const coef = Float64Array.of((observed[LEAD_DA] ?? 0) / (pattern[0] || 1), 0, 0);
-  const weights = new Float64Array(points);
+  coef[0] = (observed[LEAD_DA] ?? 0) / (pattern[0] || 1);
+  coef[1] = 0;
+  coef[2] = 0;
+  // Per round, the weighted Gram matrix g[i][j] = Σ w·p_i·p_j and b[j] = Σ w·o·p_j of the three columns:
+  // each coordinate step is then (b_j − Σ_{i≠j} c_i·g_ij) / g_jj, the least-squares scale of column j
+  // with the other two held — the same step as summing the residuals position by position.
   for (let round = 0; round < 3; round += 1) {
+    g.fill(0);
+    b.fill(0);
     for (let k = 0; k < points; k += 1) {
-      const s = sigma(Math.max(observed[k] as number, modelAt(coef, p0, p1, p2, k)), noise);
-      weights[k] = 1 / (s * s);
+      const o = observed[k] as number;
+      const s = sigma(Math.max(o, modelAt(coef, p0, p1, p2, k)), noise);
+      const w = 1 / (s * s);
+      const a0 = p0[k] as number;
+      const a1 = p1[k] as number;
+      const a2 = p2[k] as number;
+      b[0] = (b[0] as number) + w * o * a0;
+      b[1] = (b[1] as number) + w * o * a1;
+      b[2] = (b[2] as number) + w * o * a2;
+      g[0] = (g[0] as number) + w * a0 * a0;
+      g[1] = (g[1] as number) + w * a0 * a1;
+      g[2] = (g[2] as number) + w * a0 * a2;
+      g[4] = (g[4] as number) + w * a1 * a1;
+      g[5] = (g[5] as number) + w * a1 * a2;
+      g[8] = (g[8] as number) + w * a2 * a2;
     }
+    g[3] = g[1] as number;
+    g[6] = g[2] as number;
+    g[7] = g[5] as number;
     for (let sweep = 0; sweep < 6; sweep += 1) {
-      for (let j = 0; j < 3; j += 1) coef[j] = refitScale(observed, weights, coef, p0, p1, p2, j);
+      for (let j = 0; j < 3; j += 1) {
+        const denominator = g[4 * j] as number;
+        let numerator = b[j] as number;
+        for (let i = 0; i < 3; i += 1) if (i !== j) numerator -= (coef[i] as number) * (g[3 * i + j] as number);
+        coef[j] = denominator > 0 ? Math.max(0, numerator / denominator) : 0;
+      }
     }
   }
   // The fit itself weighs every position (a zero weight would let a shifted cluster grow there
