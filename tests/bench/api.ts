@@ -1,6 +1,7 @@
 // REST benchmarks against the benchmark database that bench:data filled: index load, memory,
 // identify latency and throughput, publish → searchable on two processes, the library list and bulk import.
 // Usage: npm run bench:api -- [--duration 10] [--import-spectra 10000] [--list-runs 20] [--publishes 5] [--skip-import]
+//        [--cpu-prof DIR]  (process A writes a V8 CPU profile into DIR when it stops)
 import { readFileSync } from 'node:fs';
 import { setTimeout as sleep } from 'node:timers/promises';
 import autocannon from 'autocannon';
@@ -195,7 +196,10 @@ async function publishBench(
 ) {
   const ds = createDataSource(url);
   await ds.initialize();
-  const generator = simulatedEntries(seededRandom(777));
+  // A new seed per run: with a fixed one, every run would publish the same spectra again, and a later
+  // run's copy would rank behind the earlier copies (equal scores rank by id) and not be found.
+  const seed = Date.now() % 2 ** 31;
+  const generator = simulatedEntries(seededRandom(seed));
   const onA: number[] = [];
   const onB: number[] = [];
   for (let i = 0; i < publishes; i++) {
@@ -225,7 +229,7 @@ async function publishBench(
     onB.push(tb);
   }
   console.log(
-    `publish → searchable (commit with NOTIFY, then identify polled every 10 ms), ${publishes} publishes:` +
+    `publish → searchable (commit with NOTIFY, then identify polled every 10 ms), ${publishes} publishes (seed ${seed}):` +
       ` process A median ${ms(quantile(onA, 0.5))} max ${ms(Math.max(...onA))}; process B median ${ms(quantile(onB, 0.5))} max ${ms(Math.max(...onB))}` +
       ` (A: ${onA.map((v) => v.toFixed(0)).join(', ')} ms; B: ${onB.map((v) => v.toFixed(0)).join(', ')} ms)`,
   );
@@ -246,7 +250,9 @@ async function main() {
   const key = await createBenchAccessKey(pool, curator.id);
   const probe = replicates[0]!.peaks;
 
-  const a = await startApi({ databaseUrl: url, port: PORT_A, key, probe });
+  const profileDir = process.argv.includes('--cpu-prof') ? process.argv[process.argv.indexOf('--cpu-prof') + 1] : undefined;
+  const nodeArgs = profileDir ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [];
+  const a = await startApi({ databaseUrl: url, port: PORT_A, key, probe, nodeArgs });
   try {
     console.log(
       `process A start: index loaded (${a.indexLoaded?.revisions} revisions) ${ms(a.indexLoaded?.loadMs ?? Number.NaN, 0)} by its log line,` +

@@ -38,7 +38,7 @@ function sigma(value: number, noise: NoiseModel): number {
   return noise.relative * value + noise.absolute;
 }
 
-
+/** Arrays one fit works in, reused by the next (sized for the longest window seen so far). */
 function newScratch(points: number) {
   const size = Math.max(64, points);
   return {

@@ -116,12 +116,14 @@ export interface SpectrumIndexMemory {
  * index by nominal m/z holds, per peak, the spectrum's slot (Uint32) and q = I^0.6 (Float32); per
  * spectrum a few Float32 sums (norms, entropy weights) and the filter values. About 14–15 bytes per peak.
  *
- * Search: the query's posting lists are walked in m/z order, accumulating per spectrum the dot products
- * (and the composite ratio term, or entropy terms). From these, each touched spectrum gets an upper and
- * a lower bound of its score; only spectra whose upper bound reaches the k-th best lower bound are scored
- * exactly, with the very function {@link compareSpectra} uses. Results are therefore identical to scoring
- * every spectrum one by one: same ids, same scores, ties broken by ascending id; spectra that share no
- * m/z with the query (score 0) are never returned.
+ * Search: the query's posting lists are walked in m/z order, accumulating per spectrum the dot product
+ * and shared-peak count (reverse searches also the query norm and composite ratio term; entropy its
+ * terms). From these, each touched spectrum gets an upper and a lower bound of its score — for a
+ * forward composite search with the ratio term anywhere in [0, 1], tightened by a second posting pass
+ * when that leaves too many spectra — and only spectra whose upper bound reaches the k-th best score are
+ * scored exactly, with the sums {@link compareSpectra} computes, in the same order. Results are
+ * therefore identical to scoring every spectrum one by one: same ids, same scores, ties broken by
+ * ascending id; spectra that share no m/z with the query (score 0) are never returned.
  *
  * Incremental: `add` appends to a small delta tier and `remove` marks a spectrum dead; the index repacks
  * itself at the next search when either grows past 1/8 of the library (or call {@link SpectrumIndex.pack}).
