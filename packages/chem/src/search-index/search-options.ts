@@ -1,5 +1,5 @@
 import { ChemError } from '../errors/chem-error';
-import { assertSimilarityMethod, type SimilarityMethod } from '../similarity/similarity-method';
+import { assertSimilarityMethod, type MatchedPeak, type SimilarityMethod } from '../similarity/similarity-method';
 
 /** What the index knows about a spectrum besides its peaks; each part optional. */
 export interface SpectrumMeta {
@@ -29,6 +29,8 @@ export interface SpectrumSearchOptions {
   retentionIndex?: { value: number; tolerance: number };
   /** Keep spectra whose mask has every `required` bit and no `forbidden` bit (missing mask = 0). */
   elementsMask?: { required?: number; forbidden?: number };
+  /** Also list, per hit, the peaks the query shares with it (as compareSpectra does). */
+  withMatchedPeaks?: boolean;
 }
 
 /** Options of the {@link SpectrumIndex} constructor. */
@@ -42,6 +44,11 @@ export interface SpectrumIndexOptions {
    * spares the repeated growth of large arrays while loading. A guess is fine; the index grows beyond it.
    */
   reserve?: { spectra: number; peaks: number };
+  /**
+   * Keep the index in SharedArrayBuffers, so that {@link SpectrumIndex.snapshot} can hand it to worker
+   * threads without copying it. Default false.
+   */
+  sharedMemory?: boolean;
 }
 
 /** One search hit: `score` is the forward score; `reverseScore` is present (and ranks) in reverse mode. */
@@ -50,6 +57,8 @@ export interface SpectrumHit {
   score: number;
   reverseScore?: number;
   matchedPeakCount: number;
+  /** With `withMatchedPeaks`: the shared peaks, as compareSpectra lists them. */
+  matchedPeaks?: MatchedPeak[];
 }
 
 /** Search options after defaults and checks, with filters as numbers (NaN = not set). */

@@ -8,7 +8,7 @@ import {
   type EntropySlotWeights,
   type PostingLists,
 } from './accumulate-postings';
-import { growTypedArray, type PackedArray } from './grow-typed-array';
+import { allocateLike, growTypedArray, type PackedArray } from './grow-typed-array';
 import { computeScoreBounds, type QueryTotals } from './score-bounds';
 import {
   passesMetaFilters,
@@ -41,7 +41,7 @@ const EXACT_SCORE_BUDGET = 3000;
 const LN_SCRATCH = new Float64Array(MAX_MZ + 1);
 
 /** Per-spectrum columns, one element per slot. NaN in nominalMass / retentionIndex = not given. */
-interface SlotColumns {
+export interface SlotColumns {
   ids: Uint32Array;
   start: Uint32Array;
   length: Uint16Array;
@@ -98,6 +98,30 @@ function optionalMeta(value: number | undefined, field: string): number {
   return value;
 }
 
+/**
+ * Everything a search reads, as {@link SpectrumIndex.snapshot} hands it out: with `sharedMemory`, the
+ * arrays live in SharedArrayBuffers, so posting this to a worker thread shares them instead of copying.
+ */
+export interface SpectrumIndexSnapshot {
+  method: SimilarityMethod;
+  k: number;
+  slotCount: number;
+  liveCount: number;
+  peakCount: number;
+  mainSlotEnd: number;
+  slot: SlotColumns;
+  peakMz: Uint16Array;
+  peakRelIntensity: Float32Array;
+  main: PostingLists;
+  delta: PostingLists;
+}
+
+function readOnlyError(): ChemError {
+  return new ChemError('INVALID_ARGUMENT', 'this index was made from a snapshot and is read-only; change the index it came from', {
+    field: 'index',
+  });
+}
+
 /** Memory held by a {@link SpectrumIndex}, in bytes. */
 export interface SpectrumIndexMemory {
   /** Packed typed arrays that make up the index (posting lists, peaks, per-spectrum values). */
@@ -134,15 +158,17 @@ export interface SpectrumIndexMemory {
  * index.search([[43, 90], [58, 30]], { k: 5 }); // [{ id: 1, score: 0.99…, matchedPeakCount: 2 }]
  */
 export class SpectrumIndex {
-  private readonly defaultMethod: SimilarityMethod;
-  private readonly defaultK: number;
+  private defaultMethod: SimilarityMethod;
+  private defaultK: number;
+  private readonly shared: boolean;
+  private readOnly = false;
   private slotCount = 0;
   private liveCount = 0;
   private deadCount = 0;
   private peakCount = 0;
   private slot: SlotColumns = emptySlotColumns();
-  private peakMz = new Uint16Array(0);
-  private peakRelIntensity = new Float32Array(0);
+  private peakMz: Uint16Array = new Uint16Array(0);
+  private peakRelIntensity: Float32Array = new Float32Array(0);
   // q = I^0.6 of each peak, kept only until the first pack so that a bulk load computes it once.
   private loadingQ: Float32Array | undefined = new Float32Array(0);
   private readonly slotById = new Map<number, number>();
@@ -159,6 +185,7 @@ export class SpectrumIndex {
   constructor(options: SpectrumIndexOptions = {}) {
     this.defaultMethod = assertSimilarityMethod(options.method ?? 'composite');
     this.defaultK = checkHitCount(options.k ?? 10);
+    this.shared = options.sharedMemory === true;
     if (options.reserve !== undefined) {
       const { spectra, peaks } = options.reserve;
       if (!Number.isInteger(spectra) || spectra < 0 || !Number.isInteger(peaks) || peaks < 0) {
@@ -176,7 +203,70 @@ export class SpectrumIndex {
 
   /** Whether a spectrum with this id is in the index. */
   has(id: number): boolean {
-    return this.slotById.has(id);
+    return this.slotOf(id) !== undefined;
+  }
+
+  /**
+   * What a search reads, for a read-only copy on another thread ({@link SpectrumIndex.fromSnapshot}).
+   * Pending changes are folded in first. With `sharedMemory` the large arrays are shared, not copied,
+   * and later changes of this index never rewrite what a snapshot covers, except that a removed
+   * spectrum is marked dead at once in every snapshot that holds it.
+   * @throws {ChemError} `INVALID_ARGUMENT` on an index that is itself a snapshot's copy.
+   */
+  snapshot(): SpectrumIndexSnapshot {
+    if (this.readOnly) throw readOnlyError();
+    this.refresh();
+    return {
+      method: this.defaultMethod,
+      k: this.defaultK,
+      slotCount: this.slotCount,
+      liveCount: this.liveCount,
+      peakCount: this.peakCount,
+      mainSlotEnd: this.mainSlotEnd,
+      slot: this.slot,
+      peakMz: this.peakMz,
+      peakRelIntensity: this.peakRelIntensity,
+      main: this.main,
+      delta: this.delta,
+    };
+  }
+
+  /**
+   * A read-only index over a snapshot (searches give exactly what the original's would at the time of
+   * the snapshot); `add`, `remove` and `pack` throw. Keep it and call {@link SpectrumIndex.adopt} with
+   * each newer snapshot, so that its search scratch is reused.
+   * @example
+   * const reader = SpectrumIndex.fromSnapshot(writer.snapshot());
+   */
+  static fromSnapshot(snapshot: SpectrumIndexSnapshot): SpectrumIndex {
+    const reader = new SpectrumIndex({ method: snapshot.method, k: snapshot.k });
+    reader.readOnly = true;
+    reader.adopt(snapshot);
+    return reader;
+  }
+
+  /**
+   * Replaces a read-only index's contents with a newer snapshot.
+   * @throws {ChemError} `INVALID_ARGUMENT` on an index not made by {@link SpectrumIndex.fromSnapshot}.
+   */
+  adopt(snapshot: SpectrumIndexSnapshot): void {
+    if (!this.readOnly) {
+      throw new ChemError('INVALID_ARGUMENT', 'only an index made by SpectrumIndex.fromSnapshot can adopt a snapshot', { field: 'index' });
+    }
+    this.defaultMethod = snapshot.method;
+    this.defaultK = snapshot.k;
+    this.slotCount = snapshot.slotCount;
+    this.liveCount = snapshot.liveCount;
+    this.peakCount = snapshot.peakCount;
+    this.mainSlotEnd = snapshot.mainSlotEnd;
+    this.slot = snapshot.slot;
+    this.peakMz = snapshot.peakMz;
+    this.peakRelIntensity = snapshot.peakRelIntensity;
+    this.main = snapshot.main;
+    this.delta = snapshot.delta;
+    this.loadingQ = undefined;
+    this.deltaDirty = false;
+    this.slotById.clear();
   }
 
   /**
@@ -189,6 +279,7 @@ export class SpectrumIndex {
    *   `INVALID_PEAKS` / `EMPTY_SPECTRUM` (fields `peaks…`) for a bad peak list.
    */
   add(id: number, peaks: PeakList, meta: SpectrumMeta = {}): void {
+    if (this.readOnly) throw readOnlyError();
     if (!Number.isInteger(id) || id < 0 || id > 0xffffffff) {
       throw new ChemError('INVALID_ARGUMENT', 'id must be an integer from 0 to 4294967295', { field: 'id' });
     }
@@ -259,6 +350,7 @@ export class SpectrumIndex {
    * @returns true if it was there.
    */
   remove(id: number): boolean {
+    if (this.readOnly) throw readOnlyError();
     const slot = this.slotById.get(id);
     if (slot === undefined) return false;
     this.slotById.delete(id);
@@ -273,6 +365,7 @@ export class SpectrumIndex {
    * spectra. Searches do this on their own when needed; call it after a bulk load to pay the cost once.
    */
   pack(): void {
+    if (this.readOnly) throw readOnlyError();
     const loadingQ = this.deadCount === 0 ? this.loadingQ : undefined;
     this.loadingQ = undefined;
     this.compactSlots();
@@ -314,7 +407,7 @@ export class SpectrumIndex {
   search(query: PeakList, options: SpectrumSearchOptions = {}): SpectrumHit[] {
     const search = resolveSearchOptions(options, { method: this.defaultMethod, k: this.defaultK });
     const queryView = prepareSpectrum(query, 'query');
-    this.refresh();
+    if (!this.readOnly) this.refresh();
     const scratch = this.ensureScratch();
     try {
       const totals = this.accumulate(queryView, search, scratch);
@@ -353,9 +446,10 @@ export class SpectrumIndex {
       hits ??= select() ?? []; // without a budget select always answers
       return hits.map((hit) => {
         const matchedPeakCount = scratch.count[hit.slot] as number;
-        if (!search.reverse) return { id: hit.id, score: hit.score, matchedPeakCount };
+        const shared = options.withMatchedPeaks === true ? { matchedPeaks: matchedPeaks(queryView, this.viewOf(hit.slot)) } : {};
+        if (!search.reverse) return { id: hit.id, score: hit.score, matchedPeakCount, ...shared };
         const score = scoreSpectrumViews(queryView, this.viewOf(hit.slot), search.method, false);
-        return { id: hit.id, score, reverseScore: hit.score, matchedPeakCount };
+        return { id: hit.id, score, reverseScore: hit.score, matchedPeakCount, ...shared };
       });
     } finally {
       scratch.count.fill(0, 0, this.slotCount);
@@ -373,9 +467,18 @@ export class SpectrumIndex {
    * index.matchedPeaks([[43, 90], [58, 30]], 1); // [{ mz: 43, … }, { mz: 58, … }]
    */
   matchedPeaks(query: PeakList, id: number): MatchedPeak[] {
-    const slot = this.slotById.get(id);
+    const slot = this.slotOf(id);
     if (slot === undefined) throw new ChemError('INVALID_ARGUMENT', `id ${id} is not in the index`, { field: 'id' });
     return matchedPeaks(prepareSpectrum(query, 'query'), this.viewOf(slot));
+  }
+
+  /** The live slot of an id; a snapshot's copy maps its ids on first use. */
+  private slotOf(id: number): number | undefined {
+    if (this.readOnly && this.slotById.size === 0) {
+      for (let slot = 0; slot < this.slotCount; slot++) this.slotById.set(this.slot.ids[slot] as number, slot);
+    }
+    const slot = this.slotById.get(id);
+    return slot !== undefined && this.slot.alive[slot] === 1 ? slot : undefined;
   }
 
   /**
@@ -476,7 +579,7 @@ export class SpectrumIndex {
   }
 
   private buildLists(fromSlot: number, toSlot: number, knownQ?: Float32Array): PostingLists {
-    const offsets = new Uint32Array(OFFSET_COUNT);
+    const offsets = allocateLike(new Uint32Array(0), OFFSET_COUNT, this.shared);
     const { alive, start: slotStart, length: slotLength } = this.slot;
     const { peakMz, peakRelIntensity } = this;
     for (let slot = fromSlot; slot < toSlot; slot++) {
@@ -490,8 +593,8 @@ export class SpectrumIndex {
     }
     for (let mz = 1; mz < OFFSET_COUNT; mz++) offsets[mz] = (offsets[mz] as number) + (offsets[mz - 1] as number);
     const total = offsets[OFFSET_COUNT - 1] as number;
-    const slots = new Uint32Array(total);
-    const weights = new Float32Array(total);
+    const slots = allocateLike(new Uint32Array(0), total, this.shared);
+    const weights = allocateLike(new Float32Array(0), total, this.shared);
     const cursor = offsets.slice();
     for (let slot = fromSlot; slot < toSlot; slot++) {
       if (alive[slot] === 0) continue;
@@ -519,13 +622,13 @@ export class SpectrumIndex {
     }
     const n = keep.length;
     const pick = <T extends PackedArray>(array: T): T => {
-      const out = new (array.constructor as new (length: number) => T)(n);
+      const out = allocateLike(array, n, this.shared);
       keep.forEach((slot, i) => (out[i] = array[slot] as number));
       return out;
     };
-    const peakMz = new Uint16Array(peaks);
-    const peakRelIntensity = new Float32Array(peaks);
-    const slotStart = new Uint32Array(n);
+    const peakMz = allocateLike(new Uint16Array(0), peaks, this.shared);
+    const peakRelIntensity = allocateLike(new Float32Array(0), peaks, this.shared);
+    const slotStart = allocateLike(new Uint32Array(0), n, this.shared);
     let cursor = 0;
     keep.forEach((slot, i) => {
       const start = this.slot.start[slot] as number;
@@ -547,12 +650,12 @@ export class SpectrumIndex {
   }
 
   private ensureSlotCapacity(n: number): void {
-    this.slot = mapSlotColumns(this.slot, (column) => growTypedArray(column, n));
+    this.slot = mapSlotColumns(this.slot, (column) => growTypedArray(column, n, undefined, this.shared));
   }
 
   private ensurePeakCapacity(n: number): void {
-    this.peakMz = growTypedArray(this.peakMz, n);
-    this.peakRelIntensity = growTypedArray(this.peakRelIntensity, n);
+    this.peakMz = growTypedArray(this.peakMz, n, undefined, this.shared);
+    this.peakRelIntensity = growTypedArray(this.peakRelIntensity, n, undefined, this.shared);
     if (this.loadingQ !== undefined) this.loadingQ = growTypedArray(this.loadingQ, n);
   }
 
