@@ -52,44 +52,62 @@ export function accumulateCosine(lists: PostingLists, acc: Accumulators, mz: num
 }
 
 /**
- * Forward weighted dot product (and composite, whose ratio term the bounds take as 0…1):
+ * Forward weighted dot product (and composite, whose ratio term the bounds take as 0…1) over the
+ * postings `from`…`to` of one query m/z, stopping at the first slot ≥ `slotLimit`:
  * sum += (mz³·W_U)·q_L = W_U·W_L. Nothing else, so the loop is a load, a multiply-add and a count;
  * `sum` must be 0 for untouched slots (the index clears it after each search).
+ * @returns the position it stopped at (`to` when the list is done).
  * @example
- * accumulateDot(lists, acc, 43, 43 ** 3 * 43 ** 3 * 15.8);
+ * accumulateDot(lists, acc, lists.offsets[43], lists.offsets[44], 4096, 43 ** 3 * 43 ** 3 * 15.8);
  */
-export function accumulateDot(lists: PostingLists, acc: Accumulators, mz: number, factor: number): void {
+export function accumulateDot(lists: PostingLists, acc: Accumulators, from: number, to: number, slotLimit: number, factor: number): number {
   const { slots, weights } = lists;
   const { count, sum } = acc;
-  const end = lists.offsets[mz + 1] as number;
-  for (let p = lists.offsets[mz] as number; p < end; p++) {
+  for (let p = from; p < to; p++) {
     const slot = slots[p] as number;
+    if (slot >= slotLimit) return p;
     sum[slot] = (sum[slot] as number) + factor * (weights[p] as number);
     count[slot] = (count[slot] as number) + 1;
   }
+  return to;
 }
 
 /**
- * The composite ratio term alone, for a second pass after {@link accumulateDot}: with r = q_L / q_U,
+ * The composite ratio term alone, for a second pass after {@link accumulateDot}, over the postings
+ * `from`…`to` of one query m/z up to the first slot ≥ `slotLimit`: with r = q_L / q_U,
  * ratioSum += min(r / r_prev, r_prev / r) from the second shared peak on. `ratioSum` and `lastRatio`
  * must be 0 for every slot on entry (r_prev = 0 then adds 0/r = 0). Only slots marked in `only` are
  * accumulated (the others' bounds already rule them out).
+ * @returns the position it stopped at (`to` when the list is done).
  * @example
- * accumulateRatio(lists, acc, 43, 15.8, candidates);
+ * accumulateRatio(lists, acc, from, to, 4096, 15.8, candidates);
  */
-export function accumulateRatio(lists: PostingLists, acc: Accumulators, mz: number, queryQ: number, only: Uint8Array): void {
+export function accumulateRatio(
+  lists: PostingLists,
+  acc: Accumulators,
+  from: number,
+  to: number,
+  slotLimit: number,
+  queryQ: number,
+  only: Uint8Array,
+): number {
   const { slots, weights } = lists;
   const { ratioSum, lastRatio } = acc;
   const inverseQueryQ = 1 / queryQ;
-  const end = lists.offsets[mz + 1] as number;
-  for (let p = lists.offsets[mz] as number; p < end; p++) {
+  for (let p = from; p < to; p++) {
     const slot = slots[p] as number;
+    if (slot >= slotLimit) return p;
     if (only[slot] === 0) continue;
     const ratio = (weights[p] as number) * inverseQueryQ;
     const previous = lastRatio[slot] as number;
-    ratioSum[slot] = (ratioSum[slot] as number) + (ratio < previous ? ratio / previous : previous / ratio);
+    // min(r, r′) / max(r, r′) without a branch (which half of the time would be mispredicted):
+    // with s = r + r′ and d = |r − r′|, min = (s − d)/2 and max = (s + d)/2.
+    const both = ratio + previous;
+    const apart = Math.abs(ratio - previous);
+    ratioSum[slot] = (ratioSum[slot] as number) + (both - apart) / (both + apart);
     lastRatio[slot] = ratio;
   }
+  return to;
 }
 
 /**

@@ -7,7 +7,7 @@ import type { SimilarityMethod } from '../similarity/similarity-method';
  * while keeping the bounds tight enough that only about k spectra need exact scoring.
  */
 export const BOUND_MARGIN = 1e-4;
-const ABSOLUTE_MARGIN = 1e-12;
+export const ABSOLUTE_MARGIN = 1e-12;
 const LN4 = Math.log(4);
 
 /** Query-wide numbers the bounds need. */
@@ -27,15 +27,15 @@ export interface SlotNorms {
 
 /**
  * Turns the posting sums into an upper and a lower bound of every touched slot's exact score
- * (untouched: upper = −1). The forward composite score (N·f1 + n·f2)/(N + n), N query peaks and n
- * shared, gets f2 ∈ [0, 1] as its interval: the posting pass then needs no division per posting, and
- * usually only a few hundred spectra whose upper bound reaches the k-th best score are scored exactly;
- * with `forwardRatioKnown` (a second pass accumulated f2 too) the bounds are tight. The reverse entropy score has no cheap estimate: its bound is
+ * (untouched: upper = −1), or of the slots in `only`. For the composite score (N·f1 + n·f2)/(N + n),
+ * N query peaks and n shared, the ratio sum must have been accumulated (in forward mode by the second
+ * pass; the first pass of a forward weighted or composite search bounds f2 by [0, 1] in
+ * {@link forwardWeightedCandidates} instead). The reverse entropy score has no cheap estimate: its bound is
  * sqrt(Σ shared library probability) — since each term (p+q)ln(p+q) − p ln p − q ln q ≤ ln 4·sqrt(p·q)
  * (equality at p = q) and Σ p over the kept query peaks is 1, Cauchy–Schwarz gives it — and its lower
  * bound is 0.
  * @example
- * computeScoreBounds('composite', false, acc, slotCount, norms, totals, upper, lower);
+ * computeScoreBounds('cosine', false, acc, slotCount, norms, totals, upper, lower);
  */
 export function computeScoreBounds(
   method: SimilarityMethod,
@@ -46,17 +46,22 @@ export function computeScoreBounds(
   totals: QueryTotals,
   upper: Float64Array,
   lower: Float64Array,
-  forwardRatioKnown = false,
+  only?: { slots: Uint32Array; count: number },
 ): void {
+  const n = only === undefined ? slotCount : only.count;
+  const list = only?.slots;
   const { count, sum, queryNormSq, ratioSum } = acc;
-  for (let slot = 0; slot < slotCount; slot++) {
+  const high = 1 + BOUND_MARGIN;
+  const low = 1 - BOUND_MARGIN;
+  for (let i = 0; i < n; i++) {
+    const slot = list === undefined ? i : (list[i] as number);
     const shared = count[slot] as number;
     if (shared === 0) {
       upper[slot] = -1;
       continue;
     }
-    let estimate: number;
     const dot = sum[slot] as number;
+    let estimate: number;
     if (method === 'cosine') {
       const queryNorm = reverse ? (queryNormSq[slot] as number) : totals.cosineNormSq;
       estimate = dot / Math.sqrt(queryNorm * (norms.cosineNormSq[slot] as number));
@@ -65,24 +70,17 @@ export function computeScoreBounds(
       estimate = Math.min(1, (dot * dot) / (queryNorm * (norms.weightedNormSq[slot] as number)));
       if (method === 'composite' && shared >= 2) {
         const queryPeaks = reverse ? shared : totals.peakCount;
-        if (!reverse && !forwardRatioKnown) {
-          // Forward, first pass: the ratio term f2 is not accumulated; it lies in [0, 1], which bounds the score.
-          const denominator = queryPeaks + shared;
-          upper[slot] = ((queryPeaks * estimate + shared) / denominator) * (1 + BOUND_MARGIN) + ABSOLUTE_MARGIN;
-          lower[slot] = ((queryPeaks * estimate) / denominator) * (1 - BOUND_MARGIN) - ABSOLUTE_MARGIN;
-          continue;
-        }
         const f2 = (ratioSum[slot] as number) / (shared - 1);
         estimate = (queryPeaks * estimate + shared * f2) / (queryPeaks + shared);
       }
     } else if (!reverse) {
       estimate = dot / LN4;
     } else {
-      upper[slot] = Math.sqrt(dot) * (1 + BOUND_MARGIN) + ABSOLUTE_MARGIN;
+      upper[slot] = Math.sqrt(dot) * high + ABSOLUTE_MARGIN;
       lower[slot] = 0;
       continue;
     }
-    upper[slot] = estimate * (1 + BOUND_MARGIN) + ABSOLUTE_MARGIN;
-    lower[slot] = estimate * (1 - BOUND_MARGIN) - ABSOLUTE_MARGIN;
+    upper[slot] = estimate * high + ABSOLUTE_MARGIN;
+    lower[slot] = estimate * low - ABSOLUTE_MARGIN;
   }
 }

@@ -5,18 +5,22 @@ export interface SlotHit {
   score: number;
 }
 
-/** What {@link selectTopHits} needs to know about the touched slots of one search. */
+/** Slots that can still be in the top k, gathered by {@link gatherCandidates}. */
+export interface CandidateList {
+  /** Scratch of at least slotCount elements; the first `count` are the candidates, in slot order. */
+  slots: Uint32Array;
+  count: number;
+  /** A score the k-th best hit is known to reach (−Infinity when fewer than k spectra are in play). */
+  floor: number;
+}
+
+/** What {@link selectTopHits} needs to know about the candidates of one search. */
 export interface TopHitInput {
-  slotCount: number;
-  /** Upper bound of each slot's score; negative for slots that share no peak with the query. */
+  candidates: CandidateList;
+  /** Upper bound of each slot's score, by slot. */
   upper: Float64Array;
-  /** Lower bound of each slot's score (≤ the exact score). */
-  lower: Float64Array;
-  /** Scratch of at least slotCount bytes, all 0 on entry; left dirty. */
-  checked: Uint8Array;
   k: number;
   idOf: (slot: number) => number;
-  passes: (slot: number) => boolean;
   exactScore: (slot: number) => number;
   /**
    * Most exact scores to spend; past it the selection gives up, returns undefined and leaves in
@@ -31,7 +35,8 @@ function better(a: SlotHit, b: SlotHit): boolean {
   return a.score > b.score || (a.score === b.score && a.id < b.id);
 }
 
-function pushHeap(heap: Float64Array, size: number, value: number): void {
+/** Min-heap of bounds: pushes `value` onto a heap of `size` elements. */
+export function pushHeap(heap: Float64Array, size: number, value: number): void {
   let i = size;
   heap[i] = value;
   while (i > 0) {
@@ -43,7 +48,8 @@ function pushHeap(heap: Float64Array, size: number, value: number): void {
   }
 }
 
-function replaceHeapTop(heap: Float64Array, size: number, value: number): void {
+/** Min-heap of bounds: replaces the smallest element with `value`. */
+export function replaceHeapTop(heap: Float64Array, size: number, value: number): void {
   let i = 0;
   heap[0] = value;
   for (;;) {
@@ -59,48 +65,102 @@ function replaceHeapTop(heap: Float64Array, size: number, value: number): void {
 }
 
 /**
- * The exact top-k of one search from score bounds: the k-th largest lower bound T among spectra that
- * pass the filters is a floor for the k-th best exact score, so only spectra whose upper bound reaches T
- * can be in the top k (ties included). Those are scored exactly, best bounds first, stopping once the
- * k-th best exact score beats every bound left. Ranked by score descending, then id ascending; spectra
- * scoring 0 are never hits.
+ * One sweep over the slots' score bounds: the k-th largest lower bound T among slots that pass the
+ * filters is a floor for the k-th best exact score, so only passing slots whose upper bound reaches T
+ * can be in the top k (ties included). Slots with a negative upper bound share no peak with the query.
+ * A slot that fails the filters gets upper = −1. `heap` is scratch of at least k elements.
  * @example
- * selectTopHits(input); // [{ slot, id, score }, ...]
+ * const candidates = gatherCandidates(slotCount, upper, lower, 10, passes, scratch, heap);
  */
-export function selectTopHits(input: TopHitInput): SlotHit[] | undefined {
-  const { slotCount, upper, lower, checked, k, passes } = input;
-  const heap = new Float64Array(k);
+export function gatherCandidates(
+  slotCount: number,
+  upper: Float64Array,
+  lower: Float64Array,
+  k: number,
+  passes: (slot: number) => boolean,
+  out: Uint32Array,
+  heap: Float64Array,
+): CandidateList {
   let heapSize = 0;
+  let count = 0;
   for (let slot = 0; slot < slotCount; slot++) {
-    if ((upper[slot] as number) < 0) continue;
-    const low = lower[slot] as number;
-    if (heapSize === k && low <= (heap[0] as number)) continue;
-    checked[slot] = 1;
+    const up = upper[slot] as number;
+    if (up < 0) continue;
+    // The floor only rises, so a bound below it now stays below it.
+    if (heapSize === k && up < (heap[0] as number)) continue;
     if (!passes(slot)) {
       upper[slot] = -1;
       continue;
     }
+    const low = lower[slot] as number;
     if (heapSize < k) pushHeap(heap, heapSize++, low);
-    else replaceHeapTop(heap, k, low);
+    else if (low > (heap[0] as number)) replaceHeapTop(heap, k, low);
+    out[count++] = slot;
   }
-  const floor = heapSize === k ? (heap[0] as number) : -Infinity;
+  return keepReaching(out, count, upper, heapSize === k ? (heap[0] as number) : -Infinity);
+}
 
-  const candidates: number[] = [];
+/**
+ * Keeps, in place and in order, the first `count` listed slots whose upper bound reaches `floor`.
+ * @example
+ * keepReaching(slots, 500, upper, 0.62); // { slots, count: 37, floor: 0.62 }
+ */
+export function keepReaching(slots: Uint32Array, count: number, upper: Float64Array, floor: number): CandidateList {
+  let kept = 0;
+  for (let i = 0; i < count; i++) {
+    const slot = slots[i] as number;
+    if ((upper[slot] as number) >= floor) slots[kept++] = slot;
+  }
+  return { slots, count: kept, floor };
+}
+
+/**
+ * Narrows a candidate list after its bounds were tightened: the floor becomes the larger of
+ * `knownFloor` (a score the k-th best is known to reach) and the k-th largest lower bound among the
+ * listed slots, which all pass the filters; slots whose upper bound falls below it are dropped.
+ * @example
+ * const narrowed = narrowCandidates(list, count, upper, lower, 10, heap, floor);
+ */
+export function narrowCandidates(
+  slots: Uint32Array,
+  count: number,
+  upper: Float64Array,
+  lower: Float64Array,
+  k: number,
+  heap: Float64Array,
+  knownFloor: number,
+): CandidateList {
+  let heapSize = 0;
+  for (let i = 0; i < count; i++) {
+    const low = lower[slots[i] as number] as number;
+    if (heapSize < k) pushHeap(heap, heapSize++, low);
+    else if (low > (heap[0] as number)) replaceHeapTop(heap, k, low);
+  }
+  return keepReaching(slots, count, upper, Math.max(knownFloor, heapSize === k ? (heap[0] as number) : -Infinity));
+}
+
+/**
+ * The exact top-k among the candidates: scored exactly, best upper bounds first, stopping once the
+ * k-th best exact score beats every bound left. Ranked by score descending, then id ascending; spectra
+ * scoring 0 are never hits.
+ * @example
+ * selectTopHits({ candidates, upper, k: 10, idOf, exactScore }); // [{ slot, id, score }, ...]
+ */
+export function selectTopHits(input: TopHitInput): SlotHit[] | undefined {
+  const { candidates, upper, k } = input;
+  const { slots, count, floor } = candidates;
   const bucketSizes = new Uint32Array(BUCKETS + 1);
-  for (let slot = 0; slot < slotCount; slot++) {
-    const up = upper[slot] as number;
-    if (up < 0 || up < floor) continue;
-    if (checked[slot] === 0 && !passes(slot)) continue;
-    candidates.push(slot);
-    const bucket = bucketOf(up);
+  for (let i = 0; i < count; i++) {
+    const bucket = bucketOf(upper[slots[i] as number] as number);
     bucketSizes[bucket] = (bucketSizes[bucket] as number) + 1;
   }
   // Counting sort by bucket, best bucket first.
   const bucketStart = new Uint32Array(BUCKETS + 2);
   for (let b = BUCKETS; b >= 0; b--) bucketStart[b] = (bucketStart[b + 1] as number) + (bucketSizes[b + 1] ?? 0);
-  const ordered = new Uint32Array(candidates.length);
+  const ordered = new Uint32Array(count);
   const cursor = bucketStart.slice();
-  for (const slot of candidates) {
+  for (let i = 0; i < count; i++) {
+    const slot = slots[i] as number;
     const bucket = bucketOf(upper[slot] as number);
     const at = cursor[bucket] as number;
     ordered[at] = slot;

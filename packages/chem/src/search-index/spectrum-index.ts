@@ -9,6 +9,7 @@ import {
   type PostingLists,
 } from './accumulate-postings';
 import { allocateLike, growTypedArray, type PackedArray } from './grow-typed-array';
+import { forwardWeightedCandidates } from './forward-candidates';
 import { computeScoreBounds, type QueryTotals } from './score-bounds';
 import {
   passesMetaFilters,
@@ -20,7 +21,7 @@ import {
   type SpectrumMeta,
   type SpectrumSearchOptions,
 } from './search-options';
-import { selectTopHits, type SlotHit } from './select-top-hits';
+import { gatherCandidates, narrowCandidates, selectTopHits, type CandidateList, type SlotHit } from './select-top-hits';
 import { ChemError } from '../errors/chem-error';
 import { matchedPeaks } from '../similarity/compare-spectra';
 import { entropyWeights } from '../similarity/entropy-similarity';
@@ -37,6 +38,8 @@ const OFFSET_COUNT = MAX_MZ + 2;
 // Exact scores (a few µs each) a forward composite search spends on its first, loose bounds before it
 // pays for the second posting pass that tightens them (about as long as a few thousand exact scores).
 const EXACT_SCORE_BUDGET = 3000;
+// Slots per block of the posting walk: the sums of 4,096 slots (48 kB) stay in the core's cache.
+const SLOT_BLOCK = 4096;
 // ln I of the peaks of the spectrum being added (a nominal spectrum has at most MAX_MZ peaks).
 const LN_SCRATCH = new Float64Array(MAX_MZ + 1);
 
@@ -176,7 +179,9 @@ export class SpectrumIndex {
   private delta: PostingLists = emptyLists();
   private mainSlotEnd = 0;
   private deltaDirty = false;
-  private scratch: (Accumulators & { upper: Float64Array; lower: Float64Array; checked: Uint8Array }) | undefined;
+  private scratch:
+    | (Accumulators & { upper: Float64Array; lower: Float64Array; checked: Uint8Array; candidates: Uint32Array })
+    | undefined;
 
   /**
    * @param options - `method` (default `composite`) and `k` (default 10) used when a search omits them.
@@ -389,7 +394,7 @@ export class SpectrumIndex {
         ...lists(this.delta),
         ...(this.loadingQ === undefined ? [] : [this.loadingQ]),
       ]),
-      scratchBytes: s === undefined ? 0 : bytes([s.count, s.sum, s.queryNormSq, s.ratioSum, s.lastRatio, s.upper, s.lower, s.checked]),
+      scratchBytes: s === undefined ? 0 : bytes([s.count, s.sum, s.queryNormSq, s.ratioSum, s.lastRatio, s.upper, s.lower, s.checked, s.candidates]),
       peakCount: this.peakCount,
     };
   }
@@ -412,38 +417,58 @@ export class SpectrumIndex {
     try {
       const totals = this.accumulate(queryView, search, scratch);
       const norms = { cosineNormSq: this.slot.cosineNormSq, weightedNormSq: this.slot.weightedNormSq };
-      const select = (budget?: { limit: number; floor: number }): SlotHit[] | undefined =>
-        selectTopHits({
+      const { upper, lower } = scratch;
+      const heap = new Float64Array(search.k);
+      const passes = this.passesFor(search);
+      let candidates: CandidateList;
+      if (!search.reverse && (search.method === 'weighted' || search.method === 'composite')) {
+        candidates = forwardWeightedCandidates({
+          acc: scratch,
           slotCount: this.slotCount,
-          upper: scratch.upper,
-          lower: scratch.lower,
-          checked: scratch.checked,
+          weightedNormSq: this.slot.weightedNormSq,
+          queryNormSq: totals.weightedNormSq,
+          queryPeakCount: totals.peakCount,
+          composite: search.method === 'composite',
           k: search.k,
-          idOf: (slot) => this.slot.ids[slot] as number,
-          passes: (slot) => this.passes(slot, search),
-          exactScore: this.exactScorer(queryView, search),
-          budget,
+          passes,
+          upper,
+          lower,
+          out: scratch.candidates,
+          heap,
         });
-      computeScoreBounds(search.method, search.reverse, scratch, this.slotCount, norms, totals, scratch.upper, scratch.lower);
+      } else {
+        computeScoreBounds(search.method, search.reverse, scratch, this.slotCount, norms, totals, upper, lower);
+        candidates = gatherCandidates(this.slotCount, upper, lower, search.k, passes, scratch.candidates, heap);
+      }
+      const ids = this.slot.ids;
+      const exactScore = this.exactScorer(queryView, search);
+      const select = (list: CandidateList, budget?: { limit: number; floor: number }): SlotHit[] | undefined =>
+        selectTopHits({ candidates: list, upper, k: search.k, idOf: (slot) => ids[slot] as number, exactScore, budget });
       let hits: SlotHit[] | undefined;
       if (search.method === 'composite' && !search.reverse) {
         // The [0, 1] interval of the ratio term leaves a few hundred spectra to score exactly for most
         // queries, but tens of thousands when many spectra share many peaks with the query: past a
         // budget, a second pass over the same postings accumulates the ratio term and tightens the bounds.
         const budget = { limit: EXACT_SCORE_BUDGET, floor: -Infinity };
-        hits = select(budget);
+        hits = select(candidates, budget);
         if (hits === undefined) {
           // Only spectra whose loose upper bound reaches a score the k-th hit already has can still be in.
-          const candidates = scratch.checked;
-          const { upper } = scratch;
-          for (let slot = 0; slot < this.slotCount; slot++) candidates[slot] = (upper[slot] as number) >= budget.floor ? 1 : 0;
-          this.accumulateRatioTerm(queryView, scratch, candidates);
-          computeScoreBounds('composite', false, scratch, this.slotCount, norms, totals, upper, scratch.lower, true);
-          for (let slot = 0; slot < this.slotCount; slot++) if (candidates[slot] === 0) upper[slot] = -1;
-          candidates.fill(0, 0, this.slotCount);
+          const marks = scratch.checked;
+          const list = candidates.slots;
+          let kept = 0;
+          for (let i = 0; i < candidates.count; i++) {
+            const slot = list[i] as number;
+            if ((upper[slot] as number) >= budget.floor) {
+              list[kept++] = slot;
+              marks[slot] = 1;
+            }
+          }
+          this.accumulateRatioTerm(queryView, scratch, marks, list, kept);
+          computeScoreBounds('composite', false, scratch, this.slotCount, norms, totals, upper, lower, { slots: list, count: kept });
+          candidates = narrowCandidates(list, kept, upper, lower, search.k, heap, budget.floor);
         }
       }
-      hits ??= select() ?? []; // without a budget select always answers
+      hits ??= select(candidates) ?? []; // without a budget select always answers
       return hits.map((hit) => {
         const matchedPeakCount = scratch.count[hit.slot] as number;
         const shared = options.withMatchedPeaks === true ? { matchedPeaks: matchedPeaks(queryView, this.viewOf(hit.slot)) } : {};
@@ -513,6 +538,19 @@ export class SpectrumIndex {
     };
   }
 
+  /** The filter test of one search; without filters only whether the slot is alive. */
+  private passesFor(search: ResolvedSearch): (slot: number) => boolean {
+    const { alive } = this.slot;
+    const unfiltered =
+      search.filter === undefined &&
+      Number.isNaN(search.minMass) &&
+      Number.isNaN(search.maxMass) &&
+      Number.isNaN(search.riMin) &&
+      search.requiredMask === 0 &&
+      search.forbiddenMask === 0;
+    return unfiltered ? (slot) => alive[slot] === 1 : (slot) => this.passes(slot, search);
+  }
+
   private passes(slot: number, search: ResolvedSearch): boolean {
     if (this.slot.alive[slot] === 0) return false;
     const metaOk = passesMetaFilters(
@@ -532,11 +570,13 @@ export class SpectrumIndex {
   private accumulate(queryView: SpectrumView, search: ResolvedSearch, acc: Accumulators): QueryTotals {
     const tiers = [this.main, this.delta];
     const totals: QueryTotals = { peakCount: queryView.end - queryView.start, cosineNormSq: 0, weightedNormSq: 0 };
+    const forwardDot = !search.reverse && (search.method === 'weighted' || search.method === 'composite');
     const entropyWeighted = search.method === 'entropy';
     const queryEntropy = entropyWeights(queryView, entropyWeighted);
     const slotWeights: EntropySlotWeights = entropyWeighted
       ? { exponents: this.slot.entropyExponent, lnTotals: this.slot.entropyLnTotal }
       : { exponents: undefined, lnTotals: this.slot.plainLnTotal };
+    const factors = forwardDot ? new Float64Array(totals.peakCount) : undefined;
     for (let i = queryView.start; i < queryView.end; i++) {
       const mz = queryView.mz[i] as number;
       const u = queryView.relIntensity[i] as number;
@@ -544,27 +584,71 @@ export class SpectrumIndex {
       const w = mz * mz * mz * q;
       totals.cosineNormSq += u * u;
       totals.weightedNormSq += w * w;
+      if (factors !== undefined) {
+        factors[i - queryView.start] = w * mz * mz * mz;
+        continue;
+      }
       const probability = Math.exp(queryEntropy.exponent * Math.log(u)) / queryEntropy.total;
       for (const tier of tiers) {
         if (search.method === 'cosine') accumulateCosine(tier, acc, mz, u);
-        else if (search.method === 'weighted' || search.method === 'composite') {
-          if (search.reverse) accumulateWeighted(tier, acc, mz, w, q);
-          else accumulateDot(tier, acc, mz, w * mz * mz * mz);
-        }
+        else if (search.method === 'weighted' || search.method === 'composite') accumulateWeighted(tier, acc, mz, w, q);
         else accumulateEntropy(tier, acc, mz, probability, slotWeights, search.reverse);
+      }
+    }
+    if (factors !== undefined) {
+      for (const tier of tiers) {
+        this.walkBlocked(tier, queryView, (lists, from, to, slotLimit, i) => accumulateDot(lists, acc, from, to, slotLimit, factors[i] as number));
       }
     }
     return totals;
   }
 
-  private accumulateRatioTerm(queryView: SpectrumView, acc: Accumulators, only: Uint8Array): void {
-    acc.ratioSum.fill(0, 0, this.slotCount);
-    acc.lastRatio.fill(0, 0, this.slotCount);
-    for (let i = queryView.start; i < queryView.end; i++) {
-      const mz = queryView.mz[i] as number;
-      const q = postingWeight(queryView.relIntensity[i] as number);
-      accumulateRatio(this.main, acc, mz, q, only);
-      accumulateRatio(this.delta, acc, mz, q, only);
+  /**
+   * Walks the query's posting lists of one tier in blocks of {@link SLOT_BLOCK} slots: within a block,
+   * every list in m/z order (so each spectrum still sees its shared peaks in m/z order), which keeps
+   * the per-slot sums a block touches in cache. `step` walks one list from `from` while the slot is
+   * below `slotLimit` and returns where it stopped.
+   */
+  private walkBlocked(
+    lists: PostingLists,
+    queryView: SpectrumView,
+    step: (lists: PostingLists, from: number, to: number, slotLimit: number, peak: number) => number,
+  ): void {
+    const n = queryView.end - queryView.start;
+    const from = new Uint32Array(n);
+    const to = new Uint32Array(n);
+    for (let i = 0; i < n; i++) {
+      const mz = queryView.mz[queryView.start + i] as number;
+      from[i] = lists.offsets[mz] as number;
+      to[i] = lists.offsets[mz + 1] as number;
+    }
+    for (let slotLimit = SLOT_BLOCK; ; slotLimit += SLOT_BLOCK) {
+      let pending = false;
+      for (let i = 0; i < n; i++) {
+        const start = from[i] as number;
+        const end = to[i] as number;
+        if (start === end) continue;
+        const stopped = step(lists, start, end, slotLimit, i);
+        from[i] = stopped;
+        if (stopped < end) pending = true;
+      }
+      if (!pending) return;
+    }
+  }
+
+  private accumulateRatioTerm(queryView: SpectrumView, acc: Accumulators, only: Uint8Array, slots: Uint32Array, count: number): void {
+    // accumulateRatio reads these only for the marked slots: clearing those is enough.
+    for (let i = 0; i < count; i++) {
+      const slot = slots[i] as number;
+      acc.ratioSum[slot] = 0;
+      acc.lastRatio[slot] = 0;
+    }
+    const queryQ = new Float64Array(queryView.end - queryView.start);
+    for (let i = queryView.start; i < queryView.end; i++) queryQ[i - queryView.start] = postingWeight(queryView.relIntensity[i] as number);
+    for (const tier of [this.main, this.delta]) {
+      this.walkBlocked(tier, queryView, (lists, from, to, slotLimit, i) =>
+        accumulateRatio(lists, acc, from, to, slotLimit, queryQ[i] as number, only),
+      );
     }
   }
 
@@ -672,6 +756,7 @@ export class SpectrumIndex {
       upper: new Float64Array(length),
       lower: new Float64Array(length),
       checked: new Uint8Array(length),
+      candidates: new Uint32Array(length),
     };
     return this.scratch;
   }
