@@ -38,7 +38,9 @@ export function checkFragmentHalogens(c: CheckContext): CheckResult {
     if ((c.intensity.get(mz - 1) ?? 0) >= 0.5 * value) continue; // not the light end of a cluster
     const end = clusterEnd(c, mz, limit + 3);
     if (end < mz + 2) continue;
-    const fits = fitHypothesesAt(c.intensity, mz, end + 1, NOISE);
+    // An allowed fit more than DECISIVE_DELTA behind the best decides the same as none, so only
+    // the fits within it are kept.
+    const fits = fitHypothesesAt(c.intensity, mz, end + 1, NOISE, DECISIVE_DELTA);
     const best = fits[0] as HypothesisFit | undefined;
     if (!best || !acceptable(best.fit) || (best.h.chlorine <= chlorine && best.h.bromine <= bromine)) continue;
     const allowed = fits.find((f) => f.h.chlorine <= chlorine && f.h.bromine <= bromine);

@@ -10,11 +10,6 @@ export interface NoiseModel {
   readonly detectionLimit?: number;
 }
 
-/** True when an absent peak is explained by the list's reporting threshold. */
-function belowDetection(observed: number, model: number, noise: NoiseModel): boolean {
-  return observed === 0 && model <= (noise.detectionLimit ?? 0);
-}
-
 /**
  * How many m/z below the candidate M the fit looks at: [M−H]+ and [M−2H]+ ions are common in EI
  * (common practice) and their clusters overlap the molecular ion's, so the model adds the same
@@ -34,27 +29,86 @@ export interface PatternFit {
   readonly shiftedScales: readonly [minusOne: number, minusTwo: number];
 }
 
-function sigma(value: number, noise: NoiseModel): number {
-  return noise.relative * value + noise.absolute;
-}
+/**
+ * The pattern read once per fit with two leading zeros: `shifted[k + j]` is the value of the
+ * component at M − j (j = 0, 1, 2) at observed index k (index 0 ↔ M−2), 0 outside the pattern.
+ * Reused by every fit (a reading makes thousands; fits never run inside one another).
+ */
+let shifted = new Float64Array(64);
 
-/** Arrays one fit works in, reused by the next (sized for the longest window seen so far). */
-function newScratch(points: number) {
-  const size = Math.max(64, points);
-  return {
-    p0: new Float64Array(size),
-    p1: new Float64Array(size),
-    p2: new Float64Array(size),
-    coef: new Float64Array(3),
-    g: new Float64Array(9),
-    b: new Float64Array(3),
-  };
-}
-let scratch = newScratch(64);
+/** What the last {@link fitInPlace} found; read right after the call, before the next fit. */
+export const lastFit = { chiSquare: 0, scale: 0, minusOne: 0, minusTwo: 0 };
 
-/** The model at position k: coef[0]·p0[k] + coef[1]·p1[k] + coef[2]·p2[k]. */
-function modelAt(coef: Float64Array, p0: Float64Array, p1: Float64Array, p2: Float64Array, k: number): number {
-  return (coef[0] as number) * (p0[k] as number) + (coef[1] as number) * (p1[k] as number) + (coef[2] as number) * (p2[k] as number);
+/**
+ * {@link fitPattern} without allocating: the result goes into {@link lastFit} and χ² is returned.
+ * The same operations in the same order as the three-column form (same results, bit for bit).
+ */
+export function fitInPlace(observed: Float64Array, pattern: Float64Array, noise: NoiseModel): number {
+  const points = observed.length;
+  if (shifted.length < points + LEAD_DA) shifted = new Float64Array(Math.max(2 * shifted.length, points + LEAD_DA));
+  const q = shifted;
+  const length = pattern.length;
+  q[0] = 0;
+  q[1] = 0;
+  for (let k = 0; k < points; k += 1) q[k + LEAD_DA] = k < length ? (pattern[k] as number) : 0;
+  const relative = noise.relative;
+  const absolute = noise.absolute;
+  let c0 = (observed[LEAD_DA] ?? 0) / (pattern[0] || 1);
+  let c1 = 0;
+  let c2 = 0;
+  // Per round, the weighted Gram matrix g_ij = Σ w·p_i·p_j and b_j = Σ w·o·p_j of the three columns
+  // (p_j[k] = q[k + 2 − j]): each coordinate step is then (b_j − Σ_{i≠j} c_i·g_ij) / g_jj, the
+  // least-squares scale of column j with the other two held.
+  for (let round = 0; round < 3; round += 1) {
+    let b0 = 0;
+    let b1 = 0;
+    let b2 = 0;
+    let g00 = 0;
+    let g01 = 0;
+    let g02 = 0;
+    let g11 = 0;
+    let g12 = 0;
+    let g22 = 0;
+    for (let k = 0; k < points; k += 1) {
+      const o = observed[k] as number;
+      const a0 = q[k] as number;
+      const a1 = q[k + 1] as number;
+      const a2 = q[k + 2] as number;
+      const model = c0 * a0 + c1 * a1 + c2 * a2;
+      const s = relative * (o > model ? o : model) + absolute;
+      const w = 1 / (s * s);
+      b0 += w * o * a0;
+      b1 += w * o * a1;
+      b2 += w * o * a2;
+      g00 += w * a0 * a0;
+      g01 += w * a0 * a1;
+      g02 += w * a0 * a2;
+      g11 += w * a1 * a1;
+      g12 += w * a1 * a2;
+      g22 += w * a2 * a2;
+    }
+    for (let sweep = 0; sweep < 6; sweep += 1) {
+      c0 = g00 > 0 ? Math.max(0, (b0 - c1 * g01 - c2 * g02) / g00) : 0;
+      c1 = g11 > 0 ? Math.max(0, (b1 - c0 * g01 - c2 * g12) / g11) : 0;
+      c2 = g22 > 0 ? Math.max(0, (b2 - c0 * g02 - c1 * g12) / g22) : 0;
+    }
+  }
+  // The fit itself weighs every position (a zero weight would let a shifted cluster grow there
+  // unchecked); only the verdict forgives absent peaks the reporting threshold explains.
+  const detectionLimit = noise.detectionLimit ?? 0;
+  let chiSquare = 0;
+  for (let k = 0; k < points; k += 1) {
+    const m = c0 * (q[k] as number) + c1 * (q[k + 1] as number) + c2 * (q[k + 2] as number);
+    const o = observed[k] as number;
+    if (o === 0 && m <= detectionLimit) continue;
+    const s = relative * (o > m ? o : m) + absolute;
+    chiSquare += ((o - m) / s) ** 2;
+  }
+  lastFit.chiSquare = chiSquare;
+  lastFit.scale = c0;
+  lastFit.minusOne = c1;
+  lastFit.minusTwo = c2;
+  return chiSquare;
 }
 
 /**
@@ -63,68 +117,8 @@ function modelAt(coef: Float64Array, p0: Float64Array, p1: Float64Array, p2: Flo
  * 0, so peaks the pattern cannot explain weigh in.
  */
 export function fitPattern(observed: Float64Array, pattern: Float64Array, noise: NoiseModel): PatternFit {
-  const points = observed.length;
-  // The pattern of the components at M, M−1 and M−2 (j = 0, 1, 2) at each observed index k (index 0 ↔
-  // M−2), pattern[k − LEAD_DA + j] or 0 outside it, read once into scratch reused by every fit (a
-  // reading makes thousands; fits never run inside one another).
-  if (scratch.p0.length < points) scratch = newScratch(points);
-  const { p0, p1, p2, coef, g, b } = scratch;
-  const length = pattern.length;
-  for (let k = 0; k < points; k += 1) {
-    const at = k - LEAD_DA;
-    p0[k] = at >= 0 && at < length ? (pattern[at] as number) : 0;
-    p1[k] = at + 1 >= 0 && at + 1 < length ? (pattern[at + 1] as number) : 0;
-    p2[k] = at + 2 >= 0 && at + 2 < length ? (pattern[at + 2] as number) : 0;
-  }
-  coef[0] = (observed[LEAD_DA] ?? 0) / (pattern[0] || 1);
-  coef[1] = 0;
-  coef[2] = 0;
-  // Per round, the weighted Gram matrix g[i][j] = Σ w·p_i·p_j and b[j] = Σ w·o·p_j of the three columns:
-  // each coordinate step is then (b_j − Σ_{i≠j} c_i·g_ij) / g_jj, the least-squares scale of column j
-  // with the other two held — the same step as summing the residuals position by position.
-  for (let round = 0; round < 3; round += 1) {
-    g.fill(0);
-    b.fill(0);
-    for (let k = 0; k < points; k += 1) {
-      const o = observed[k] as number;
-      const s = sigma(Math.max(o, modelAt(coef, p0, p1, p2, k)), noise);
-      const w = 1 / (s * s);
-      const a0 = p0[k] as number;
-      const a1 = p1[k] as number;
-      const a2 = p2[k] as number;
-      b[0] = (b[0] as number) + w * o * a0;
-      b[1] = (b[1] as number) + w * o * a1;
-      b[2] = (b[2] as number) + w * o * a2;
-      g[0] = (g[0] as number) + w * a0 * a0;
-      g[1] = (g[1] as number) + w * a0 * a1;
-      g[2] = (g[2] as number) + w * a0 * a2;
-      g[4] = (g[4] as number) + w * a1 * a1;
-      g[5] = (g[5] as number) + w * a1 * a2;
-      g[8] = (g[8] as number) + w * a2 * a2;
-    }
-    g[3] = g[1] as number;
-    g[6] = g[2] as number;
-    g[7] = g[5] as number;
-    for (let sweep = 0; sweep < 6; sweep += 1) {
-      for (let j = 0; j < 3; j += 1) {
-        const denominator = g[4 * j] as number;
-        let numerator = b[j] as number;
-        for (let i = 0; i < 3; i += 1) if (i !== j) numerator -= (coef[i] as number) * (g[3 * i + j] as number);
-        coef[j] = denominator > 0 ? Math.max(0, numerator / denominator) : 0;
-      }
-    }
-  }
-  // The fit itself weighs every position (a zero weight would let a shifted cluster grow there
-  // unchecked); only the verdict forgives absent peaks the reporting threshold explains.
-  let chiSquare = 0;
-  for (let k = 0; k < points; k += 1) {
-    const m = modelAt(coef, p0, p1, p2, k);
-    const o = observed[k] as number;
-    if (belowDetection(o, m, noise)) continue;
-    const s = sigma(Math.max(o, m), noise);
-    chiSquare += ((o - m) / s) ** 2;
-  }
-  return { chiSquare, points, scale: (coef[0] as number), shiftedScales: [(coef[1] as number), (coef[2] as number)] };
+  const chiSquare = fitInPlace(observed, pattern, noise);
+  return { chiSquare, points: observed.length, scale: lastFit.scale, shiftedScales: [lastFit.minusOne, lastFit.minusTwo] };
 }
 
 /**
@@ -133,6 +127,11 @@ export function fitPattern(observed: Float64Array, pattern: Float64Array, noise:
  */
 export function moleculeShare(observed: Float64Array, pattern: Float64Array, fit: PatternFit, k: number): number {
   const [minusOne, minusTwo] = fit.shiftedScales;
+  return shareWithout(observed, pattern, minusOne, minusTwo, k);
+}
+
+/** {@link moleculeShare} from the two shifted scales themselves. */
+export function shareWithout(observed: Float64Array, pattern: Float64Array, minusOne: number, minusTwo: number, k: number): number {
   const raw = observed[LEAD_DA + k] ?? 0;
   return Math.max(0, raw - minusOne * (pattern[k + 1] ?? 0) - minusTwo * (pattern[k + 2] ?? 0));
 }

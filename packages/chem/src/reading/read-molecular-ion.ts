@@ -8,10 +8,12 @@ import { clusterPattern, type HeteroatomHypothesis } from './cluster-model';
 import { acceptable, acceptableChiSquare, fitHypothesesAt, type HypothesisFit } from './fit-hypotheses';
 import { LEAD_DA, moleculeShare, type NoiseModel } from './fit-cluster';
 
-/** What {@link readMolecularIon} concludes about the molecular ion, with every number behind it. */
 /** The molecular ion's fitted share must be at least this fraction of its [M−2H]+ share. */
 const PLAUSIBLE_M_SHARE = 0.3;
+/** Hypotheses whose score is within this Δχ² of the best are rivals worth naming. */
+const RIVAL_DELTA = 4;
 
+/** What {@link readMolecularIon} concludes about the molecular ion, with every number behind it. */
 export interface MolecularIonReading {
   /** Nominal m/z of M (lightest isotopes), or null when M is likely absent from the spectrum. */
   molecularIonMz: number | null;
@@ -109,12 +111,6 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
   const significant = spectrum.filter(([, value]) => value >= minRelIntensity);
   const top = (significant[significant.length - 1] ?? spectrum[spectrum.length - 1])?.[0] as number;
 
-  const perHypothesisFit: HypothesisFit[][] = [];
-  for (const [mz] of significant) {
-    if (mz < top - WINDOW_DA) continue;
-    const fits = fitHypothesesAt(intensity, mz, top + 2, detectedNoise);
-    if (fits.length > 0) perHypothesisFit.push(fits);
-  }
   // A candidate whose own cluster is a sliver beside its fitted [M−2H]+ cluster is a degenerate
   // fit: the shifted cluster explains everything, and a halogen cluster's M is read as its M+2.
   // [M−H]+ far above M is real (methanol, aldehydes), [M−2H]+ above about three times M is rare
@@ -125,8 +121,22 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
   };
   const byReducedChiSquare = (a: HypothesisFit[], b: HypothesisFit[]) =>
     (a[0] as HypothesisFit).fit.chiSquare / (a[0] as HypothesisFit).fit.points - (b[0] as HypothesisFit).fit.chiSquare / (b[0] as HypothesisFit).fit.points;
-  const chosenList =
-    perHypothesisFit.find((fits) => plausible(fits) && acceptable((fits[0] as HypothesisFit).fit)) ??
+  // Candidates from the lowest m/z up; the first plausible one with an acceptable fit is M, so the
+  // candidates above it are never fitted. Only fits within Δχ² RIVAL_DELTA of each candidate's best
+  // are kept: nothing below reads further down a list.
+  const perHypothesisFit: HypothesisFit[][] = [];
+  let chosenList: HypothesisFit[] | undefined;
+  for (const [mz] of significant) {
+    if (mz < top - WINDOW_DA) continue;
+    const fits = fitHypothesesAt(intensity, mz, top + 2, detectedNoise, RIVAL_DELTA);
+    if (fits.length === 0) continue;
+    perHypothesisFit.push(fits);
+    if (plausible(fits) && acceptable((fits[0] as HypothesisFit).fit)) {
+      chosenList = fits;
+      break;
+    }
+  }
+  chosenList ??=
     [...perHypothesisFit].filter(plausible).sort(byReducedChiSquare)[0] ??
     [...perHypothesisFit].sort(byReducedChiSquare)[0];
   if (!chosenList) throw new RangeError('no candidate molecular ion could be fitted');
@@ -159,7 +169,7 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
     label: 'Cluster fit',
     value: `${formatHypothesis(h)} with C${best.carbon}: χ² ${best.fit.chiSquare.toFixed(1)} over ${best.fit.points} m/z (acceptable ≤ ${acceptableChiSquare(best.fit.points).toFixed(1)}); σ = ${noise.relative * 100} % of each peak + ${noise.absolute} % of base peak`,
   });
-  const rivals = chosenList.filter((c) => c.score - best.score <= 4 && (c.h.chlorine !== h.chlorine || c.h.bromine !== h.bromine));
+  const rivals = chosenList.filter((c) => c.score - best.score <= RIVAL_DELTA && (c.h.chlorine !== h.chlorine || c.h.bromine !== h.bromine));
   const rivalNames = [...new Set(rivals.map((c) => formatHypothesis(c.h)))];
   if (rivalNames.length > 0) notes.push(`Also consistent with the cluster (within Δχ² 4): ${rivalNames.join('; ')}.`);
 
@@ -176,7 +186,7 @@ export function readMolecularIon(peaks: PeakList, options: ReadMolecularIonOptio
     }
   }
 
-  const sameHalogens = chosenList.filter((c) => c.h.chlorine === h.chlorine && c.h.bromine === h.bromine && c.score - best.score <= 4);
+  const sameHalogens = chosenList.filter((c) => c.h.chlorine === h.chlorine && c.h.bromine === h.bromine && c.score - best.score <= RIVAL_DELTA);
   const carbon = carbonRange({
     m,
     observed: o,
