@@ -13,8 +13,10 @@ export interface ForwardCandidateInput {
   queryPeakCount: number;
   composite: boolean;
   k: number;
-  /** Whether a slot passes the search's filters (called only for slots that could be hits). */
-  passes: (slot: number) => boolean;
+  /** 1 for a live slot, 0 for a removed one. */
+  alive: Uint8Array;
+  /** The search's other filters, when it has any (called only for live slots that could be hits). */
+  passes: ((slot: number) => boolean) | undefined;
   upper: Float64Array;
   lower: Float64Array;
   out: Uint32Array;
@@ -32,11 +34,15 @@ export interface ForwardCandidateInput {
  * const candidates = forwardWeightedCandidates(input);
  */
 export function forwardWeightedCandidates(input: ForwardCandidateInput): CandidateList {
-  const { acc, slotCount, weightedNormSq, queryNormSq, composite, k, passes, upper, lower, out, heap } = input;
+  const { acc, slotCount, weightedNormSq, queryNormSq, composite, k, alive, passes, upper, lower, out, heap } = input;
   const { count, sum } = acc;
   const n = input.queryPeakCount;
+  const inverseN = 1 / n;
   const high = 1 + BOUND_MARGIN;
   const low = 1 - BOUND_MARGIN;
+  // 1 / (N + s) for every shared count s ≤ N, so that a candidate costs one division (f1).
+  const inverseDenominator = new Float64Array(n + 1);
+  for (let shared = 0; shared <= n; shared++) inverseDenominator[shared] = 1 / (n + shared);
   let heapSize = 0;
   // A slot can be a candidate only if upper ≥ floor, i.e. (N·f1 + s)·high ≥ (floor − ABS)·(N + s) for s
   // shared peaks (composite), f1·high ≥ floor − ABS otherwise. `reach` = (floor − ABS) / high.
@@ -51,17 +57,17 @@ export function forwardWeightedCandidates(input: ForwardCandidateInput): Candida
     const ratioPart = composite && shared >= 2;
     if (heapSize === k) {
       // Needed: f1 ≥ need, with f1 = min(1, dotSq / normProduct).
-      const need = ratioPart ? (reach * (n + shared) - shared) / n : reach;
+      const need = ratioPart ? (reach * (n + shared) - shared) * inverseN : reach;
       if (need > 0 && (need > 1 || dotSq < need * normProduct)) continue;
     }
-    if (!passes(slot)) continue;
+    if (alive[slot] === 0 || (passes !== undefined && !passes(slot))) continue;
     const f1 = Math.min(1, dotSq / normProduct);
     let up: number;
     let down: number;
     if (ratioPart) {
-      const denominator = n + shared;
-      up = ((n * f1 + shared) / denominator) * high + ABSOLUTE_MARGIN;
-      down = ((n * f1) / denominator) * low - ABSOLUTE_MARGIN;
+      const inverse = inverseDenominator[shared] as number;
+      up = (n * f1 + shared) * inverse * high + ABSOLUTE_MARGIN;
+      down = n * f1 * inverse * low - ABSOLUTE_MARGIN;
     } else {
       up = f1 * high + ABSOLUTE_MARGIN;
       down = f1 * low - ABSOLUTE_MARGIN;

@@ -419,7 +419,7 @@ export class SpectrumIndex {
       const norms = { cosineNormSq: this.slot.cosineNormSq, weightedNormSq: this.slot.weightedNormSq };
       const { upper, lower } = scratch;
       const heap = new Float64Array(search.k);
-      const passes = this.passesFor(search);
+      const { passes, filtered } = this.passesFor(search);
       let candidates: CandidateList;
       if (!search.reverse && (search.method === 'weighted' || search.method === 'composite')) {
         candidates = forwardWeightedCandidates({
@@ -430,7 +430,8 @@ export class SpectrumIndex {
           queryPeakCount: totals.peakCount,
           composite: search.method === 'composite',
           k: search.k,
-          passes,
+          alive: this.slot.alive,
+          passes: filtered ? passes : undefined,
           upper,
           lower,
           out: scratch.candidates,
@@ -538,8 +539,8 @@ export class SpectrumIndex {
     };
   }
 
-  /** The filter test of one search; without filters only whether the slot is alive. */
-  private passesFor(search: ResolvedSearch): (slot: number) => boolean {
+  /** The filter test of one search (the slot is alive and passes), and whether it has filters at all. */
+  private passesFor(search: ResolvedSearch): { passes: (slot: number) => boolean; filtered: boolean } {
     const { alive } = this.slot;
     const unfiltered =
       search.filter === undefined &&
@@ -548,7 +549,9 @@ export class SpectrumIndex {
       Number.isNaN(search.riMin) &&
       search.requiredMask === 0 &&
       search.forbiddenMask === 0;
-    return unfiltered ? (slot) => alive[slot] === 1 : (slot) => this.passes(slot, search);
+    return unfiltered
+      ? { passes: (slot) => alive[slot] === 1, filtered: false }
+      : { passes: (slot) => this.passes(slot, search), filtered: true };
   }
 
   private passes(slot: number, search: ResolvedSearch): boolean {
