@@ -22,6 +22,8 @@ export interface TopHitInput {
   k: number;
   idOf: (slot: number) => number;
   exactScore: (slot: number) => number;
+  /** Scratch for the candidates in bound order, reused when it is long enough. */
+  ordered?: Uint32Array;
   /**
    * Most exact scores to spend; past it the selection gives up, returns undefined and leaves in
    * `floor` a score the k-th best hit is known to reach (−Infinity when fewer than k were scored).
@@ -157,7 +159,7 @@ export function selectTopHits(input: TopHitInput): SlotHit[] | undefined {
   // Counting sort by bucket, best bucket first.
   const bucketStart = new Uint32Array(BUCKETS + 2);
   for (let b = BUCKETS; b >= 0; b--) bucketStart[b] = (bucketStart[b + 1] as number) + (bucketSizes[b + 1] ?? 0);
-  const ordered = new Uint32Array(count);
+  const ordered = input.ordered !== undefined && input.ordered.length >= count ? input.ordered : new Uint32Array(count);
   const cursor = bucketStart.slice();
   for (let i = 0; i < count; i++) {
     const slot = slots[i] as number;

@@ -180,7 +180,7 @@ export class SpectrumIndex {
   private mainSlotEnd = 0;
   private deltaDirty = false;
   private scratch:
-    | (Accumulators & { upper: Float64Array; lower: Float64Array; checked: Uint8Array; candidates: Uint32Array })
+    | (Accumulators & { upper: Float64Array; lower: Float64Array; checked: Uint8Array; candidates: Uint32Array; ordered: Uint32Array })
     | undefined;
 
   /**
@@ -394,7 +394,7 @@ export class SpectrumIndex {
         ...lists(this.delta),
         ...(this.loadingQ === undefined ? [] : [this.loadingQ]),
       ]),
-      scratchBytes: s === undefined ? 0 : bytes([s.count, s.sum, s.queryNormSq, s.ratioSum, s.lastRatio, s.upper, s.lower, s.checked, s.candidates]),
+      scratchBytes: s === undefined ? 0 : bytes([s.count, s.sum, s.queryNormSq, s.ratioSum, s.lastRatio, s.upper, s.lower, s.checked, s.candidates, s.ordered]),
       peakCount: this.peakCount,
     };
   }
@@ -444,7 +444,7 @@ export class SpectrumIndex {
       const ids = this.slot.ids;
       const exactScore = this.exactScorer(queryView, search);
       const select = (list: CandidateList, budget?: { limit: number; floor: number }): SlotHit[] | undefined =>
-        selectTopHits({ candidates: list, upper, k: search.k, idOf: (slot) => ids[slot] as number, exactScore, budget });
+        selectTopHits({ candidates: list, upper, k: search.k, idOf: (slot) => ids[slot] as number, exactScore, ordered: scratch.ordered, budget });
       let hits: SlotHit[] | undefined;
       if (search.method === 'composite' && !search.reverse) {
         // The [0, 1] interval of the ratio term leaves a few hundred spectra to score exactly for most
@@ -760,6 +760,7 @@ export class SpectrumIndex {
       lower: new Float64Array(length),
       checked: new Uint8Array(length),
       candidates: new Uint32Array(length),
+      ordered: new Uint32Array(length),
     };
     return this.scratch;
   }
