@@ -4,6 +4,7 @@ import { notFound } from '../../shared/app-error';
 import { recordAudit } from '../audit/audit.service';
 import type { SessionUser } from '../users/users.schemas';
 import type { UploadedBlock } from '../uploads/spectrum-file';
+import type { PreparedBlock } from './import-block';
 import { CHUNK_BLOCKS, importChunk, prepareChunk } from './import-chunk';
 import type { ImportTarget } from './import-writer';
 import { workerPreparer } from './prepare-pool';
@@ -40,9 +41,15 @@ export async function startImport(
 }
 
 /**
- * Checks the blocks and writes them chunk by chunk, each chunk in one transaction; the next chunk
- * is checked (on worker threads when the file has more than one chunk) while the previous one is
- * being written.
+ * Chunks asked of the checks ahead of the one being written: the workers keep checking while the
+ * main thread writes, and a chunk that checks slowly does not leave them idle.
+ */
+const CHUNKS_AHEAD = 2;
+
+/**
+ * Checks the blocks and writes them chunk by chunk, each chunk in one transaction; the next chunks
+ * are checked (on worker threads when the file has more than one chunk) while one is being
+ * written.
  */
 async function runImport(
   ds: DataSource,
@@ -59,14 +66,21 @@ async function runImport(
     const chunk = blocks.slice(start, start + CHUNK_BLOCKS);
     return preparer ? preparer.prepare(chunk) : prepareChunk(chunk);
   };
+  const ahead: Promise<PreparedBlock[]>[] = [];
+  let asked = 0;
+  const askAhead = () => {
+    for (; ahead.length < CHUNKS_AHEAD && asked < blocks.length; asked += CHUNK_BLOCKS) ahead.push(chunkAt(asked));
+  };
   try {
-    let next = chunkAt(0);
-    for (let start = 0; start < blocks.length; start += CHUNK_BLOCKS) {
-      const prepared = await next;
-      if (start + CHUNK_BLOCKS < blocks.length) next = chunkAt(start + CHUNK_BLOCKS);
-      await importChunk(job, prepared, progress);
+    askAhead();
+    for (let prepared = ahead.shift(); prepared; prepared = ahead.shift()) {
+      const chunk = await prepared;
+      askAhead();
+      await importChunk(job, chunk, progress);
     }
   } finally {
+    // Chunks still being checked when a write failed are dropped with the workers.
+    for (const p of ahead) p.catch(() => undefined);
     await preparer?.close();
   }
   await ds.transaction(async (m) => {
