@@ -2,6 +2,7 @@
 // identify latency and throughput, publish → searchable on two processes, the library list and bulk import.
 // Usage: npm run bench:api -- [--duration 10] [--import-spectra 10000] [--list-runs 20] [--publishes 5] [--skip-import]
 //        [--cpu-prof DIR]  (process A writes a V8 CPU profile into DIR when it stops)
+//        [--only-import]   (just the bulk import, into any benchmark database; needs no replicates file)
 import { readFileSync } from 'node:fs';
 import { setTimeout as sleep } from 'node:timers/promises';
 import autocannon from 'autocannon';
@@ -35,9 +36,10 @@ const publishes = numberFlag('publishes', 5);
 const PORT_A = numberFlag('port', 8290);
 const PORT_B = PORT_A + 1;
 
-const replicates = (
-  JSON.parse(readFileSync(replicatesFile(url), 'utf8')) as { entries: number; queries: ReplicateQuery[] }
-).queries;
+const onlyImport = hasFlag('only-import');
+const replicates = onlyImport
+  ? []
+  : (JSON.parse(readFileSync(replicatesFile(url), 'utf8')) as { entries: number; queries: ReplicateQuery[] }).queries;
 const pool = new pg.Pool({ connectionString: url, max: 2 });
 
 async function benchUser(login: string, role: 'contributor' | 'curator'): Promise<SessionUser> {
@@ -238,6 +240,11 @@ async function publishBench(
 }
 
 async function main() {
+  if (onlyImport) {
+    await importBench(await benchUser('bench-curator', 'curator'));
+    await pool.end();
+    return;
+  }
   const { rows } = await pool.query<{ n: number }>(
     `SELECT count(*)::int AS n FROM revisions WHERE state = 'published'`,
   );
