@@ -1,4 +1,4 @@
-import { SpectrumIndex, type MatchedPeak, type PeakList } from '@ionfolio/chem';
+import { SpectrumIndex, type MatchedPeak, type PeakList, type SpectrumIndexSnapshot } from '@ionfolio/chem';
 import { formulaMask } from './element-mask';
 
 /** One published (or edition member) revision as the search needs it. */
@@ -24,7 +24,11 @@ export type CandidateMeta = Omit<LibraryRevision, 'peaks'>;
 export interface LibraryIndex {
   readonly index: SpectrumIndex;
   readonly size: number;
+  /** Counts the puts and removes so far, so that a search pool can tell whether its workers are current. */
+  readonly version: number;
   meta(id: number): CandidateMeta;
+  /** The meta of the hit `id`, or undefined once its revision has left the index. */
+  metaIfPresent(id: number): CandidateMeta | undefined;
   /** The peaks the query shares with the hit `id`, as compareSpectra lists them. */
   matchedPeaks(query: PeakList, id: number): MatchedPeak[];
   /** Adds the revision, replacing whatever revision of the same entry was there. */
@@ -32,29 +36,42 @@ export interface LibraryIndex {
   /** Removes the entry's revision; true if there was one. */
   remove(accession: string): boolean;
   has(accession: string, revision?: number): boolean;
+  /** What worker threads search (SpectrumIndex.snapshot); shared, not copied, with `sharedMemory`. */
+  snapshot(): SpectrumIndexSnapshot;
 }
 
-function emptyLibraryIndex(reserve?: { spectra: number; peaks: number }): LibraryIndex {
-  const index = new SpectrumIndex(reserve && { reserve });
+/** `sharedMemory`: the index lives in SharedArrayBuffers, so that worker threads search it without a copy. */
+function emptyLibraryIndex(options: { reserve?: { spectra: number; peaks: number }; sharedMemory?: boolean } = {}): LibraryIndex {
+  const index = new SpectrumIndex({ reserve: options.reserve, sharedMemory: options.sharedMemory });
   const metaById = new Map<number, CandidateMeta>();
   const idByAccession = new Map<string, number>();
+  // Ids are never reused within one library index, so a hit found on an older snapshot names either
+  // its own revision or one that has left (metaIfPresent answers undefined), never another entry.
   let nextId = 1;
+  let version = 0;
 
   const library: LibraryIndex = {
     index,
     get size() {
       return index.size;
     },
+    get version() {
+      return version;
+    },
     meta(id) {
       const meta = metaById.get(id);
       if (!meta) throw new Error(`library index: no revision for id ${id}`);
       return meta;
+    },
+    metaIfPresent(id) {
+      return metaById.get(id);
     },
     matchedPeaks(query, id) {
       return index.matchedPeaks(query, id);
     },
     put(revision) {
       library.remove(revision.accession);
+      version++;
       const id = nextId++;
       const { peaks, ...meta } = revision;
       index.add(id, peaks, {
@@ -68,6 +85,7 @@ function emptyLibraryIndex(reserve?: { spectra: number; peaks: number }): Librar
     remove(accession) {
       const id = idByAccession.get(accession);
       if (id === undefined) return false;
+      version++;
       index.remove(id);
       metaById.delete(id);
       idByAccession.delete(accession);
@@ -77,13 +95,16 @@ function emptyLibraryIndex(reserve?: { spectra: number; peaks: number }): Librar
       const id = idByAccession.get(accession);
       return id !== undefined && (revision === undefined || metaById.get(id)?.revision === revision);
     },
+    snapshot() {
+      return index.snapshot();
+    },
   };
   return library;
 }
 
 /** An index over these revisions, packed. */
-export function createLibraryIndex(revisions: Iterable<LibraryRevision> = []): LibraryIndex {
-  const library = emptyLibraryIndex();
+export function createLibraryIndex(revisions: Iterable<LibraryRevision> = [], options: { sharedMemory?: boolean } = {}): LibraryIndex {
+  const library = emptyLibraryIndex(options);
   for (const revision of revisions) library.put(revision);
   library.index.pack();
   return library;
@@ -96,8 +117,9 @@ export function createLibraryIndex(revisions: Iterable<LibraryRevision> = []): L
 export async function loadLibraryIndex(
   pages: AsyncIterable<LibraryRevision[]>,
   reserve?: { spectra: number; peaks: number },
+  options: { sharedMemory?: boolean } = {},
 ): Promise<LibraryIndex> {
-  const library = emptyLibraryIndex(reserve);
+  const library = emptyLibraryIndex({ reserve, sharedMemory: options.sharedMemory });
   for await (const page of pages) for (const revision of page) library.put(revision);
   library.index.pack();
   return library;
