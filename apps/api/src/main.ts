@@ -20,9 +20,10 @@ const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
 // 'error' event without a listener would end the process.
 sessionPool.on('error', (err) => logger.warn({ err }, 'session pool lost a connection; it reconnects on the next request'));
 const search = createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger });
+// The search workers boot while the library loads; they are sent the index once it is loaded.
+search.pool.warm();
 // The library index is loaded (and LISTEN in place) before the first request is accepted.
 await search.start();
-search.readings.warm();
 const app = createApp({ env, dataSource, logger, sessionPool, search });
 const mail = createMailDispatcher(
   dataSource,

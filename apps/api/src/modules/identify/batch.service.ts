@@ -2,8 +2,9 @@ import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { notFound } from '../../shared/app-error';
 import type { SessionUser } from '../users/users.schemas';
-import { searchCandidates } from './identify.service';
+import { rankCandidates } from './identify.service';
 import type { LibrarySearch } from './library-search';
+import type { SearchPool } from './search-pool';
 import type { UnknownSpectrum } from './batch-file';
 import { BATCH_TOP, type BatchJobView, type BatchOptions, type BatchResult } from './batch.schemas';
 
@@ -55,10 +56,11 @@ export interface BatchRunner {
 
 /**
  * Batch identify jobs, stored in PostgreSQL (they outlive a page reload and belong to their creator)
- * and run in the background of this API process, one at a time, yielding to the event loop between
- * spectra so that interactive calls stay quick.
+ * and run in the background of this API process, one at a time, one spectrum after another (on the
+ * search pool's workers when it can search there), yielding to the event loop between spectra so that
+ * interactive calls stay quick.
  */
-export function createBatchRunner(ds: DataSource, library: LibrarySearch, logger: Logger): BatchRunner {
+export function createBatchRunner(ds: DataSource, library: LibrarySearch, logger: Logger, pool?: SearchPool): BatchRunner {
   let chain: Promise<void> = Promise.resolve();
 
   async function run(id: string): Promise<void> {
@@ -78,7 +80,7 @@ export function createBatchRunner(ds: DataSource, library: LibrarySearch, logger
       for (const [i, unknown] of job.spectra.entries()) {
         const name = unknown.name ?? `spectrum ${i + 1}`;
         try {
-          const candidates = searchCandidates(index, unknown.peaks, job.options, BATCH_TOP).map(({ matchedPeaks: _m, ...c }) => c);
+          const candidates = await rankCandidates(index, unknown.peaks, job.options, BATCH_TOP, { pool });
           results.push({ index: i + 1, name, best: candidates[0] ?? null, candidates });
         } catch (err) {
           results.push({ index: i + 1, name, best: null, candidates: [], error: (err as Error).message });

@@ -18,7 +18,7 @@ export function identifyRoutes(search: SearchService, options: { limit: RequestH
   const access = requireRole('reader', { scope: 'search' });
 
   r.post('/identify', access, options.limit, async (req, res) => {
-    res.json(await identify(search.library, IdentifyBody.parse(req.body), search.readings));
+    res.json(await identify(search.library, IdentifyBody.parse(req.body), search.pool));
   });
 
   r.post('/identify/batch', access, options.limit, upload.single('file'), async (req, res) => {

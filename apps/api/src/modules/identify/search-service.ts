@@ -2,27 +2,30 @@ import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { createBatchRunner, type BatchRunner } from './batch.service';
 import { createLibrarySearch, type LibrarySearch } from './library-search';
-import { createReadingPool, type ReadingPool } from './reading-pool';
+import { createSearchPool, searchWorkerCount, type SearchPool } from './search-pool';
 
-/** The library index, its listener and the batch runner of one API process. */
+/** The library index, its listener, the search pool and the batch runner of one API process. */
 export interface SearchService {
   library: LibrarySearch;
   batch: BatchRunner;
-  /** The molecular-ion readings of identify, on a worker thread. */
-  readings: ReadingPool;
+  /** The searches and molecular-ion readings of identify, on worker threads. */
+  pool: SearchPool;
   /** Loads the library, starts listening and takes over orphaned batch jobs. */
   start(): Promise<void>;
   stop(): Promise<void>;
 }
 
-export function createSearchService(options: { ds: DataSource; databaseUrl: string; logger: Logger }): SearchService {
-  const library = createLibrarySearch(options);
-  const batch = createBatchRunner(options.ds, library, options.logger);
-  const readings = createReadingPool(options.logger);
+/** `searchWorkers`: threads of the search pool; default IONFOLIO_SEARCH_WORKERS or 2; 0 = the main thread. */
+export function createSearchService(options: { ds: DataSource; databaseUrl: string; logger: Logger; searchWorkers?: number }): SearchService {
+  const workers = options.searchWorkers ?? searchWorkerCount();
+  const pool = createSearchPool(options.logger, workers);
+  // Without workers the index needs no shared memory and no snapshots.
+  const library = createLibrarySearch({ ...options, pool: workers > 0 ? pool : undefined });
+  const batch = createBatchRunner(options.ds, library, options.logger, pool);
   return {
     library,
     batch,
-    readings,
+    pool,
     async start() {
       await library.start();
       await batch.resumeOrphans();
@@ -30,7 +33,7 @@ export function createSearchService(options: { ds: DataSource; databaseUrl: stri
     async stop() {
       await library.stop();
       await batch.idle();
-      await readings.close();
+      await pool.close();
     },
   };
 }
