@@ -13,8 +13,8 @@ export interface ForwardCandidateInput {
   queryPeakCount: number;
   composite: boolean;
   k: number;
-  /** 1 for a live slot, 0 for a removed one. */
-  alive: Uint8Array;
+  /** Per slot: bit 0 set for a live spectrum, clear for a removed one. */
+  flags: Uint8Array;
   /** The search's other filters, when it has any (called only for live slots that could be hits). */
   passes: ((slot: number) => boolean) | undefined;
   upper: Float64Array;
@@ -34,7 +34,7 @@ export interface ForwardCandidateInput {
  * const candidates = forwardWeightedCandidates(input);
  */
 export function forwardWeightedCandidates(input: ForwardCandidateInput): CandidateList {
-  const { acc, slotCount, weightedNormSq, queryNormSq, composite, k, alive, passes, upper, lower, out, heap } = input;
+  const { acc, slotCount, weightedNormSq, queryNormSq, composite, k, flags, passes, upper, lower, out, heap } = input;
   const { count, sum } = acc;
   const n = input.queryPeakCount;
   const inverseN = 1 / n;
@@ -60,7 +60,7 @@ export function forwardWeightedCandidates(input: ForwardCandidateInput): Candida
       const need = ratioPart ? (reach * (n + shared) - shared) * inverseN : reach;
       if (need > 0 && (need > 1 || dotSq < need * normProduct)) continue;
     }
-    if (alive[slot] === 0 || (passes !== undefined && !passes(slot))) continue;
+    if (((flags[slot] as number) & 1) === 0 || (passes !== undefined && !passes(slot))) continue;
     const f1 = Math.min(1, dotSq / normProduct);
     let up: number;
     let down: number;

@@ -9,7 +9,15 @@ export interface SpectrumMeta {
   retentionIndex?: number;
   /** Bit mask of the elements in the formula (bit numbering is the caller's), for `elementsMask`. */
   elementsMask?: number;
+  /**
+   * A small class number of the caller's (1 … {@link MAX_GROUP}; 0 or absent = none), for `group`:
+   * e.g. the column class a retention index was measured on.
+   */
+  group?: number;
 }
+
+/** The largest group number a spectrum can carry (seven bits beside the index's live flag). */
+export const MAX_GROUP = 127;
 
 /** Options of {@link SpectrumIndex.search}. Filters exclude spectra that lack the value filtered on. */
 export interface SpectrumSearchOptions {
@@ -29,6 +37,8 @@ export interface SpectrumSearchOptions {
   retentionIndex?: { value: number; tolerance: number };
   /** Keep spectra whose mask has every `required` bit and no `forbidden` bit (missing mask = 0). */
   elementsMask?: { required?: number; forbidden?: number };
+  /** Keep only spectra of this group (1 … {@link MAX_GROUP}). */
+  group?: number;
   /** Also list, per hit, the peaks the query shares with it (as compareSpectra does). */
   withMatchedPeaks?: boolean;
 }
@@ -73,6 +83,8 @@ export interface ResolvedSearch {
   riMax: number;
   requiredMask: number;
   forbiddenMask: number;
+  /** 0 = no group filter. */
+  group: number;
 }
 
 function finiteOrThrow(value: unknown, field: string): number {
@@ -123,6 +135,10 @@ export function resolveSearchOptions(
     riMin = value - tolerance;
     riMax = value + tolerance;
   }
+  const group = options.group ?? 0;
+  if (options.group !== undefined && (!Number.isInteger(group) || group < 1 || group > MAX_GROUP)) {
+    throw new ChemError('INVALID_ARGUMENT', `group must be an integer from 1 to ${MAX_GROUP}`, { field: 'group' });
+  }
   return {
     method,
     reverse: options.reverse ?? false,
@@ -134,16 +150,24 @@ export function resolveSearchOptions(
     riMax,
     requiredMask: (options.elementsMask?.required ?? 0) >>> 0,
     forbiddenMask: (options.elementsMask?.forbidden ?? 0) >>> 0,
+    group,
   };
 }
 
 /**
- * Whether a spectrum with this meta passes the numeric filters (not the `filter` callback).
+ * Whether a spectrum with this meta passes the numeric filters and the group (not the `filter` callback).
  * NaN meta means the value is missing; a spectrum missing a filtered value is excluded.
  * @example
  * passesMetaFilters(resolved, 120, NaN, 0);
  */
-export function passesMetaFilters(search: ResolvedSearch, nominalMass: number, retentionIndex: number, elementsMask: number): boolean {
+export function passesMetaFilters(
+  search: ResolvedSearch,
+  nominalMass: number,
+  retentionIndex: number,
+  elementsMask: number,
+  group = 0,
+): boolean {
+  if (search.group !== 0 && group !== search.group) return false;
   if (!Number.isNaN(search.minMass) && !(nominalMass >= search.minMass)) return false;
   if (!Number.isNaN(search.maxMass) && !(nominalMass <= search.maxMass)) return false;
   if (!Number.isNaN(search.riMin) && !(retentionIndex >= search.riMin && retentionIndex <= search.riMax)) return false;

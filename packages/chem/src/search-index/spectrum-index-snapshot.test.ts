@@ -38,7 +38,7 @@ describe('SpectrumIndex snapshots', () => {
     library.slice(0, 300).forEach((peaks, id) => writer.add(id, peaks));
     writer.pack();
     const snapshot = transfer(writer.snapshot());
-    for (const array of [snapshot.main.slots, snapshot.main.weights, snapshot.peakMz, snapshot.slot.alive, snapshot.slot.weightedNormSq]) {
+    for (const array of [snapshot.main.slots, snapshot.main.weights, snapshot.peakMz, snapshot.slot.flags, snapshot.slot.weightedNormSq]) {
       expect(array.buffer).toBeInstanceOf(SharedArrayBuffer);
     }
     const reader = SpectrumIndex.fromSnapshot(snapshot);

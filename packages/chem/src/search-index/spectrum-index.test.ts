@@ -18,7 +18,9 @@ interface Entry {
 function searchOneByOne(entries: Entry[], query: PeakList, options: SpectrumSearchOptions & { method: SimilarityMethod }) {
   const resolved = resolveSearchOptions(options, { method: options.method, k: 10 });
   return entries
-    .filter((e) => passesMetaFilters(resolved, e.meta.nominalMass ?? NaN, e.meta.retentionIndex ?? NaN, (e.meta.elementsMask ?? 0) >>> 0))
+    .filter((e) =>
+      passesMetaFilters(resolved, e.meta.nominalMass ?? NaN, e.meta.retentionIndex ?? NaN, (e.meta.elementsMask ?? 0) >>> 0, e.meta.group ?? 0),
+    )
     .filter((e) => options.filter === undefined || options.filter(e.id))
     .map((e) => {
       const forward = compareSpectra(query, e.peaks, { method: options.method });
@@ -45,6 +47,7 @@ const metaArb: fc.Arbitrary<SpectrumMeta> = fc.record(
     nominalMass: fc.integer({ min: 50, max: 300 }),
     retentionIndex: fc.integer({ min: 800, max: 1600 }),
     elementsMask: fc.integer({ min: 0, max: 15 }),
+    group: fc.integer({ min: 0, max: 3 }),
   },
   { requiredKeys: [] },
 );
@@ -61,7 +64,9 @@ describe('SpectrumIndex', () => {
         fc.boolean(),
         fc.integer({ min: 1, max: 8 }),
         fc.boolean(),
-        fc.option(fc.record({ minMass: fc.integer({ min: 40, max: 200 }), tolerance: fc.integer({ min: 0, max: 400 }) })),
+        fc.option(
+          fc.record({ minMass: fc.integer({ min: 40, max: 200 }), tolerance: fc.integer({ min: 0, max: 400 }), group: fc.option(fc.integer({ min: 1, max: 3 })) }),
+        ),
         (first, later, removals, query, method, reverse, k, packBetween, filters) => {
           const index = new SpectrumIndex();
           const entries: Entry[] = [];
@@ -89,6 +94,7 @@ describe('SpectrumIndex', () => {
             options.minMass = filters.minMass;
             options.retentionIndex = { value: 1200, tolerance: filters.tolerance };
             options.filter = (id) => id % 2 === 0;
+            if (filters.group !== null) options.group = filters.group;
           }
           expect(index.search(query, options)).toEqual(searchOneByOne(entries, query, options));
         },
@@ -139,6 +145,27 @@ describe('SpectrumIndex', () => {
     expect(ids({ elementsMask: { required: 0b10 } })).toEqual([2]);
     expect(ids({ elementsMask: { forbidden: 0b10 } })).toEqual([1, 3]);
     expect(ids({ filter: (id) => id !== 1 })).toEqual([2, 3]);
+  });
+
+  it('keeps only the spectra of a group when asked (e.g. one column class), for every method; spectra without a group never match', () => {
+    const index = new SpectrumIndex();
+    const peaks = [[43, 100], [58, 20], [71, 8]] as const;
+    index.add(1, peaks, { group: 1 });
+    index.add(2, peaks, { group: 2 });
+    index.add(3, peaks);
+    index.add(4, peaks, { group: 127 });
+    for (const method of SIMILARITY_METHODS) {
+      expect(index.search(peaks, { method, group: 2 }).map((hit) => hit.id)).toEqual([2]);
+      expect(index.search(peaks, { method, group: 127, reverse: true }).map((hit) => hit.id)).toEqual([4]);
+      expect(index.search(peaks, { method }).map((hit) => hit.id)).toEqual([1, 2, 3, 4]);
+    }
+    index.remove(2);
+    expect(index.search(peaks, { group: 2 })).toEqual([]);
+    const invalid = (field: string) => expect.objectContaining({ code: 'INVALID_ARGUMENT', field });
+    expect(() => index.add(5, peaks, { group: 128 })).toThrow(invalid('meta.group'));
+    expect(() => index.add(5, peaks, { group: 1.5 })).toThrow(invalid('meta.group'));
+    expect(() => index.search(peaks, { group: 0 })).toThrow(invalid('group'));
+    expect(index.size).toBe(3);
   });
 
   it('never returns spectra that share no m/z with the query', () => {

@@ -32,9 +32,12 @@ import { peakWeight, sharedSums } from '../similarity/aligned-sums';
 import { compositeFromSums } from '../similarity/composite-similarity';
 import { STEIN_SCOTT_INTENSITY_POWER, STEIN_SCOTT_MZ_POWER, weightedFromSums } from '../similarity/weighted-dot-product';
 import { MAX_MZ } from '../spectrum/validate-peaks';
+import { MAX_GROUP } from './search-options';
 import type { PeakList } from '../types';
 
 const OFFSET_COUNT = MAX_MZ + 2;
+// Bit 0 of a slot's flags; the group sits in bits 1–7.
+const LIVE = 1;
 // Exact scores (a few µs each) a forward composite search spends on its first, loose bounds before it
 // pays for the second posting pass that tightens them (about as long as a few thousand exact scores).
 const EXACT_SCORE_BUDGET = 3000;
@@ -48,7 +51,8 @@ export interface SlotColumns {
   ids: Uint32Array;
   start: Uint32Array;
   length: Uint16Array;
-  alive: Uint8Array;
+  /** Bit 0: the spectrum is live (not removed). Bits 1–7: its group (0 = none), see SpectrumMeta.group. */
+  flags: Uint8Array;
   nominalMass: Float32Array;
   retentionIndex: Float32Array;
   elementsMask: Uint32Array;
@@ -65,7 +69,7 @@ function emptySlotColumns(): SlotColumns {
     ids: new Uint32Array(0),
     start: new Uint32Array(0),
     length: new Uint16Array(0),
-    alive: new Uint8Array(0),
+    flags: new Uint8Array(0),
     nominalMass: new Float32Array(0),
     retentionIndex: new Float32Array(0),
     elementsMask: new Uint32Array(0),
@@ -294,6 +298,10 @@ export class SpectrumIndex {
     const nominalMass = optionalMeta(meta.nominalMass, 'meta.nominalMass');
     const retentionIndex = optionalMeta(meta.retentionIndex, 'meta.retentionIndex');
     const elementsMask = optionalMeta(meta.elementsMask, 'meta.elementsMask');
+    const group = meta.group ?? 0;
+    if (!Number.isInteger(group) || group < 0 || group > MAX_GROUP) {
+      throw new ChemError('INVALID_ARGUMENT', `meta.group must be an integer from 0 to ${MAX_GROUP}`, { field: 'meta.group' });
+    }
     const view = prepareSpectrum(peaks, 'peaks');
     const length = view.end - view.start;
     const slot = this.slotCount;
@@ -302,7 +310,7 @@ export class SpectrumIndex {
     this.slot.ids[slot] = id;
     this.slot.start[slot] = this.peakCount;
     this.slot.length[slot] = length;
-    this.slot.alive[slot] = 1;
+    this.slot.flags[slot] = LIVE | (group << 1);
     this.slot.nominalMass[slot] = nominalMass;
     this.slot.retentionIndex[slot] = retentionIndex;
     this.slot.elementsMask[slot] = Number.isNaN(elementsMask) ? 0 : elementsMask >>> 0;
@@ -359,7 +367,7 @@ export class SpectrumIndex {
     const slot = this.slotById.get(id);
     if (slot === undefined) return false;
     this.slotById.delete(id);
-    this.slot.alive[slot] = 0;
+    this.slot.flags[slot] = (this.slot.flags[slot] as number) & ~LIVE;
     this.liveCount--;
     this.deadCount++;
     return true;
@@ -430,7 +438,7 @@ export class SpectrumIndex {
           queryPeakCount: totals.peakCount,
           composite: search.method === 'composite',
           k: search.k,
-          alive: this.slot.alive,
+          flags: this.slot.flags,
           passes: filtered ? passes : undefined,
           upper,
           lower,
@@ -504,7 +512,7 @@ export class SpectrumIndex {
       for (let slot = 0; slot < this.slotCount; slot++) this.slotById.set(this.slot.ids[slot] as number, slot);
     }
     const slot = this.slotById.get(id);
-    return slot !== undefined && this.slot.alive[slot] === 1 ? slot : undefined;
+    return slot !== undefined && ((this.slot.flags[slot] as number) & LIVE) !== 0 ? slot : undefined;
   }
 
   /**
@@ -539,28 +547,31 @@ export class SpectrumIndex {
     };
   }
 
-  /** The filter test of one search (the slot is alive and passes), and whether it has filters at all. */
+  /** The filter test of one search (the slot is live and passes), and whether it has filters at all. */
   private passesFor(search: ResolvedSearch): { passes: (slot: number) => boolean; filtered: boolean } {
-    const { alive } = this.slot;
+    const { flags } = this.slot;
     const unfiltered =
       search.filter === undefined &&
       Number.isNaN(search.minMass) &&
       Number.isNaN(search.maxMass) &&
       Number.isNaN(search.riMin) &&
       search.requiredMask === 0 &&
-      search.forbiddenMask === 0;
+      search.forbiddenMask === 0 &&
+      search.group === 0;
     return unfiltered
-      ? { passes: (slot) => alive[slot] === 1, filtered: false }
+      ? { passes: (slot) => ((flags[slot] as number) & LIVE) !== 0, filtered: false }
       : { passes: (slot) => this.passes(slot, search), filtered: true };
   }
 
   private passes(slot: number, search: ResolvedSearch): boolean {
-    if (this.slot.alive[slot] === 0) return false;
+    const flags = this.slot.flags[slot] as number;
+    if ((flags & LIVE) === 0) return false;
     const metaOk = passesMetaFilters(
       search,
       this.slot.nominalMass[slot] as number,
       this.slot.retentionIndex[slot] as number,
       this.slot.elementsMask[slot] as number,
+      flags >> 1,
     );
     return metaOk && (search.filter === undefined || search.filter(this.slot.ids[slot] as number) === true);
   }
@@ -667,10 +678,10 @@ export class SpectrumIndex {
 
   private buildLists(fromSlot: number, toSlot: number, knownQ?: Float32Array): PostingLists {
     const offsets = allocateLike(new Uint32Array(0), OFFSET_COUNT, this.shared);
-    const { alive, start: slotStart, length: slotLength } = this.slot;
+    const { flags, start: slotStart, length: slotLength } = this.slot;
     const { peakMz, peakRelIntensity } = this;
     for (let slot = fromSlot; slot < toSlot; slot++) {
-      if (alive[slot] === 0) continue;
+      if (((flags[slot] as number) & LIVE) === 0) continue;
       const start = slotStart[slot] as number;
       const end = start + (slotLength[slot] as number);
       for (let p = start; p < end; p++) {
@@ -684,7 +695,7 @@ export class SpectrumIndex {
     const weights = allocateLike(new Float32Array(0), total, this.shared);
     const cursor = offsets.slice();
     for (let slot = fromSlot; slot < toSlot; slot++) {
-      if (alive[slot] === 0) continue;
+      if (((flags[slot] as number) & LIVE) === 0) continue;
       const start = slotStart[slot] as number;
       const end = start + (slotLength[slot] as number);
       for (let p = start; p < end; p++) {
@@ -702,7 +713,7 @@ export class SpectrumIndex {
     const keep: number[] = [];
     let peaks = 0;
     for (let slot = 0; slot < this.slotCount; slot++) {
-      if (this.slot.alive[slot] === 1) {
+      if (((this.slot.flags[slot] as number) & LIVE) !== 0) {
         keep.push(slot);
         peaks += this.slot.length[slot] as number;
       }

@@ -1,8 +1,8 @@
-import { type MolecularIonReading, type PeakList, type SpectrumHit, type SpectrumSearchOptions } from '@ionfolio/chem';
+import { type MolecularIonReading, type PeakList, type SpectrumHit } from '@ionfolio/chem';
 import { IDENTIFY_CAUTION } from './caution';
 import { withChemErrors, withChemErrorsAsync } from './chem-errors';
 import { maskOf } from './element-mask';
-import type { CandidateMeta, LibraryIndex } from './library-index';
+import { columnGroup, type CandidateMeta, type LibraryIndex } from './library-index';
 import type { LibrarySearch } from './library-search';
 import { readOnThisThread, type PoolSearchOptions, type SearchPool } from './search-pool';
 import type { Candidate, IdentifyMethod, IdentifyRequest, SearchOptions } from './identify.schemas';
@@ -15,7 +15,7 @@ type RetentionWindow = IdentifyRequest['retentionIndex'];
 /** A candidate without the peaks it shares with the query, as a batch answer lists it. */
 export type RankedCandidate = Omit<Candidate, 'matchedPeaks'>;
 
-function poolOptions(options: SearchOptions, k: number, withMatchedPeaks: boolean): PoolSearchOptions {
+function searchOptions(options: SearchOptions, k: number, withMatchedPeaks: boolean, ri: RetentionWindow): PoolSearchOptions {
   return {
     method: options.method,
     reverse: options.reverse,
@@ -23,23 +23,16 @@ function poolOptions(options: SearchOptions, k: number, withMatchedPeaks: boolea
     minMass: options.minMass,
     maxMass: options.maxMass,
     elementsMask: options.elements && { required: maskOf(options.elements.required), forbidden: maskOf(options.elements.forbidden) },
+    retentionIndex: ri && { value: ri.value, tolerance: ri.tolerance },
+    // A retention index is comparable only on the same column class: the index keeps it as a group.
+    group: ri && columnGroup(ri.column),
     withMatchedPeaks,
   };
 }
 
-function indexOptions(options: SearchOptions, k: number, withMatchedPeaks: boolean, library: LibraryIndex, ri: RetentionWindow): SpectrumSearchOptions {
-  return {
-    ...poolOptions(options, k, withMatchedPeaks),
-    retentionIndex: ri && { value: ri.value, tolerance: ri.tolerance },
-    // A retention index is comparable only on the same column class.
-    filter: ri && ((id) => library.meta(id).retentionIndexColumn === ri.column),
-  };
-}
-
 /**
- * The exact top-k hits of one query against one library index. The current library without a
- * retention-index window is searched in the pool (its column check is a callback, which cannot cross
- * threads; an edition's index is not in shared memory); anything else here, on the main thread.
+ * The exact top-k hits of one query against one library index. The current library is searched in
+ * the pool; an edition's index (not in shared memory) here, on the main thread.
  */
 async function findHits(
   library: LibraryIndex,
@@ -50,10 +43,9 @@ async function findHits(
   context: { pool?: SearchPool; ri?: RetentionWindow; path?: string },
 ): Promise<SpectrumHit[]> {
   const { pool, ri, path = 'peaks' } = context;
-  if (pool && options.edition === undefined && ri === undefined) {
-    return withChemErrorsAsync(pool.search(library, peaks, poolOptions(options, k, withMatchedPeaks)), path);
-  }
-  return withChemErrors(() => library.index.search(peaks, indexOptions(options, k, withMatchedPeaks, library, ri)), path);
+  const searched = searchOptions(options, k, withMatchedPeaks, ri);
+  if (pool && options.edition === undefined) return withChemErrorsAsync(pool.search(library, peaks, searched), path);
+  return withChemErrors(() => library.index.search(peaks, searched), path);
 }
 
 function ranked(meta: CandidateMeta, hit: SpectrumHit): RankedCandidate {

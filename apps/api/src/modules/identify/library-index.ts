@@ -1,5 +1,15 @@
 import { SpectrumIndex, type MatchedPeak, type PeakList, type SpectrumIndexSnapshot } from '@ionfolio/chem';
+import { COLUMN_CLASSES } from '@ionfolio/contracts';
 import { formulaMask } from './element-mask';
+
+/**
+ * The index group of a retention index's column class (1, 2, 3 in the order of COLUMN_CLASSES; 0 for
+ * none or an unknown class, which no retention-index window matches): a retention index is comparable
+ * only on the same column class, and as a group the index can check that on any thread.
+ */
+export function columnGroup(column: string | null | undefined): number {
+  return (COLUMN_CLASSES as readonly (string | null | undefined)[]).indexOf(column) + 1;
+}
 
 /** One published (or edition member) revision as the search needs it. */
 export interface LibraryRevision {
@@ -78,6 +88,7 @@ function emptyLibraryIndex(options: { reserve?: { spectra: number; peaks: number
         nominalMass: meta.nominalMass,
         retentionIndex: meta.retentionIndex ?? undefined,
         elementsMask: formulaMask(meta.formula),
+        group: columnGroup(meta.retentionIndexColumn),
       });
       metaById.set(id, meta);
       idByAccession.set(revision.accession, id);
