@@ -8,6 +8,15 @@ const bool = z
 export const SIGN_IN_RATE_DEFAULT = 30;
 const SIGN_IN_RATE_TEST_DEFAULT = 600;
 
+// Worker threads of the search pool (identify/search-pool.ts): default 2, one per core of the machine
+// the figures in docs/benchmarks.md come from; 0 searches and reads on the main thread. Empty counts
+// as unset.
+const SEARCH_WORKERS_MESSAGE = 'must be an integer from 0 to 16';
+const SearchWorkers = z.preprocess(
+  (v) => (v === '' ? undefined : v),
+  z.coerce.number({ error: SEARCH_WORKERS_MESSAGE }).int(SEARCH_WORKERS_MESSAGE).min(0, SEARCH_WORKERS_MESSAGE).max(16, SEARCH_WORKERS_MESSAGE).default(2),
+);
+
 const EnvSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -40,6 +49,7 @@ const EnvSchema = z
     // Sign-in requests (/auth/github and its callback) per client address and minute, per API process.
     // Unset: 30, or 600 when NODE_ENV=test (test suites sign dozens of users in from 127.0.0.1).
     SIGN_IN_RATE_PER_MINUTE: z.coerce.number().int().min(1).max(100000).optional(),
+    IONFOLIO_SEARCH_WORKERS: SearchWorkers,
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && env.SESSION_SECRET.startsWith('dev-only')) {
@@ -71,4 +81,11 @@ export function loadDatabaseUrl(source: NodeJS.ProcessEnv = process.env): string
   const parsed = z.object({ DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//) }).safeParse(source);
   if (!parsed.success) throw new Error('Invalid configuration:\n  DATABASE_URL: must be a postgres:// URL');
   return parsed.data.DATABASE_URL;
+}
+
+/** IONFOLIO_SEARCH_WORKERS alone, for a search service made without the parsed Env at hand. */
+export function loadSearchWorkers(source: NodeJS.ProcessEnv = process.env): number {
+  const parsed = SearchWorkers.safeParse(source.IONFOLIO_SEARCH_WORKERS);
+  if (!parsed.success) throw new Error(`Invalid configuration:\n  IONFOLIO_SEARCH_WORKERS: ${SEARCH_WORKERS_MESSAGE}`);
+  return parsed.data;
 }

@@ -5,7 +5,7 @@ import { createLogger } from '../../shared/logger';
 import { seeded } from './identify-test-helpers';
 import { searchCandidates } from './identify.service';
 import { createLibraryIndex, type LibraryRevision } from './library-index';
-import { createSearchPool, readOnThisThread, searchWorkerCount, type PoolSearchOptions } from './search-pool';
+import { createSearchPool, readOnThisThread, type PoolSearchOptions } from './search-pool';
 
 const log = createLogger('silent');
 const LIBRARY_SIZE = 3000;
@@ -46,14 +46,6 @@ const optionSets: PoolSearchOptions[] = [
 ];
 
 describe('search pool', () => {
-  it('takes its number of workers from IONFOLIO_SEARCH_WORKERS: 2 unless set, 0 allowed, nonsense refused', () => {
-    expect(searchWorkerCount({})).toBe(2);
-    expect(searchWorkerCount({ IONFOLIO_SEARCH_WORKERS: '0' })).toBe(0);
-    expect(searchWorkerCount({ IONFOLIO_SEARCH_WORKERS: '3' })).toBe(3);
-    expect(() => searchWorkerCount({ IONFOLIO_SEARCH_WORKERS: 'two' })).toThrow(/IONFOLIO_SEARCH_WORKERS/);
-    expect(() => searchWorkerCount({ IONFOLIO_SEARCH_WORKERS: '-1' })).toThrow(/IONFOLIO_SEARCH_WORKERS/);
-  });
-
   it('searches on its workers exactly what the main thread finds, matched peaks included', async () => {
     const random = seeded(7);
     const queries = Array.from({ length: 12 }, () => simulatedReplicate(spectra[Math.floor(random() * LIBRARY_SIZE)]!, random));

@@ -1,7 +1,6 @@
 import { Session } from 'node:inspector';
 import type { Worker } from 'node:worker_threads';
 import type { Logger } from 'pino';
-import { z } from 'zod';
 import {
   ChemError,
   readMolecularIon,
@@ -103,18 +102,6 @@ export interface SearchPool {
   runningWorkers(): Worker[];
 }
 
-const SearchWorkerCount = z.coerce.number().int().min(0).max(16).default(2);
-
-/**
- * IONFOLIO_SEARCH_WORKERS: worker threads of the search pool, default 2 (one per core of the machine
- * the figures in docs/benchmarks.md come from); 0 searches and reads on the main thread.
- */
-export function searchWorkerCount(source: NodeJS.ProcessEnv = process.env): number {
-  const parsed = SearchWorkerCount.safeParse(source.IONFOLIO_SEARCH_WORKERS || undefined);
-  if (!parsed.success) throw new Error('Invalid configuration:\n  IONFOLIO_SEARCH_WORKERS: must be an integer from 0 to 16');
-  return parsed.data;
-}
-
 type TaskKind = 'search' | 'read';
 
 interface Pending {
@@ -139,11 +126,7 @@ interface Lane {
  * Started on the first task or by warm(); a worker that fails leaves the pool, its unanswered tasks
  * are redone on the calling thread, and with no worker left everything runs there.
  */
-export function createSearchPool(
-  log: Logger,
-  size = searchWorkerCount(),
-  options: { collectAfterDroppedBytes?: number } = {},
-): SearchPool {
+export function createSearchPool(log: Logger, size: number, options: { collectAfterDroppedBytes?: number } = {}): SearchPool {
   const collectAfterDroppedBytes = options.collectAfterDroppedBytes ?? COLLECT_AFTER_DROPPED_BYTES;
   const lanes: Lane[] = [];
   let started = false;

@@ -1,8 +1,9 @@
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
+import { loadSearchWorkers } from '../../config/env';
 import { createBatchRunner, type BatchRunner } from './batch.service';
 import { createLibrarySearch, type LibrarySearch } from './library-search';
-import { createSearchPool, searchWorkerCount, type SearchPool } from './search-pool';
+import { createSearchPool, type SearchPool } from './search-pool';
 
 /** The library index, its listener, the search pool and the batch runner of one API process. */
 export interface SearchService {
@@ -15,9 +16,12 @@ export interface SearchService {
   stop(): Promise<void>;
 }
 
-/** `searchWorkers`: threads of the search pool; default IONFOLIO_SEARCH_WORKERS or 2; 0 = the main thread. */
+/**
+ * `searchWorkers`: threads of the search pool, `env.IONFOLIO_SEARCH_WORKERS`; 0 = the main thread. When
+ * not given, the variable is read here (same parse, same default of 2).
+ */
 export function createSearchService(options: { ds: DataSource; databaseUrl: string; logger: Logger; searchWorkers?: number }): SearchService {
-  const workers = options.searchWorkers ?? searchWorkerCount();
+  const workers = options.searchWorkers ?? loadSearchWorkers();
   const pool = createSearchPool(options.logger, workers);
   // Without workers the index needs no shared memory and no snapshots.
   const library = createLibrarySearch({ ...options, pool: workers > 0 ? pool : undefined });
