@@ -1,11 +1,23 @@
+import { setTimeout as sleep } from 'node:timers/promises';
+import { Worker } from 'node:worker_threads';
 import { afterAll, describe, expect, it } from 'vitest';
-import { ChemError, isotopeCluster, simulatedLibrary, simulatedReplicate, type Peak, type SpectrumSearchOptions } from '@ionfolio/chem';
+import {
+  ChemError,
+  isotopeCluster,
+  simulatedLibrary,
+  simulatedReplicate,
+  type Peak,
+  type PeakList,
+  type SpectrumIndex,
+  type SpectrumSearchOptions,
+} from '@ionfolio/chem';
 import { pino } from 'pino';
 import { createLogger } from '../../shared/logger';
+import { startModuleWorker } from '../../shared/module-worker';
 import { seeded } from './identify-test-helpers';
 import { searchCandidates } from './identify.service';
 import { createLibraryIndex, type LibraryRevision } from './library-index';
-import { createSearchPool, readOnThisThread, type PoolSearchOptions } from './search-pool';
+import { createSearchPool, readOnThisThread, type PoolSearchOptions, type SearchSource } from './search-pool';
 
 const log = createLogger('silent');
 const LIBRARY_SIZE = 3000;
@@ -44,6 +56,28 @@ const optionSets: PoolSearchOptions[] = [
   { method: 'entropy', k: 3, maxMass: 200, elementsMask: { forbidden: 1 << 3 }, withMatchedPeaks: true },
   { method: 'composite', reverse: true, k: 4 },
 ];
+
+// The search worker as the pool starts it, and one that throws as soon as it runs.
+const searchWorker = () => startModuleWorker(new URL('./search-worker', import.meta.url), import.meta.url);
+const failingWorker = () => new Worker("throw new Error('fails at start')", { eval: true });
+
+/** Waits until `done()` holds, checking every 20 ms; fails after `timeoutMs`. */
+async function until(done: () => boolean, timeoutMs = 5000): Promise<void> {
+  const t0 = performance.now();
+  while (!done()) {
+    if (performance.now() - t0 > timeoutMs) throw new Error(`not done within ${timeoutMs} ms`);
+    await sleep(20);
+  }
+}
+
+/** A logger at warn that keeps its lines, and the parsed lines with a given message start. */
+function recordingLogger() {
+  const lines: string[] = [];
+  const logger = pino({ level: 'warn' }, { write: (line: string) => void lines.push(line) });
+  const logged = (start: string) =>
+    lines.map((line) => JSON.parse(line) as { msg: string; workers: number; restartInMs?: number }).filter((entry) => entry.msg.startsWith(start));
+  return { logger, logged };
+}
 
 describe('search pool', () => {
   it('searches on its workers exactly what the main thread finds, matched peaks included', async () => {
@@ -160,8 +194,13 @@ describe('search pool', () => {
     await inline.close();
   });
 
-  it('when a worker dies under a task, redoes the task on the main thread; with no worker left, works there', async () => {
-    const fragile = createSearchPool(log, 2);
+  it('when a worker dies under a task, redoes the task on the main thread; while no worker is left, works there', async () => {
+    // The first two workers are real; their replacements fail at start and wait long to be retried.
+    let starts = 0;
+    const fragile = createSearchPool(log, 2, {
+      startWorker: () => (starts++ < 2 ? searchWorker() : failingWorker()),
+      restartBackoff: { firstMs: 60_000, maxMs: 60_000 },
+    });
     fragile.sync(library);
     fragile.warm();
     const options = { k: 5, withMatchedPeaks: true };
@@ -179,7 +218,161 @@ describe('search pool', () => {
     expect(await fragile.search(library, spectra[9]!, options)).toEqual(library.index.search(spectra[9]!, options));
     expect(await fragile.read(clusters[2]!)).toEqual(readOnThisThread(clusters[2]!));
     await expect(fragile.search(library, [[43, Number.NaN]], options)).rejects.toBeInstanceOf(ChemError);
+    // Each place was refilled once, by a worker that failed at start and joined nothing.
+    await until(() => starts === 4);
+    await sleep(100);
+    expect(fragile.runningWorkers()).toHaveLength(0);
+    expect(starts).toBe(4);
     await fragile.close();
+  });
+
+  it('when a worker is terminated, a new one takes its place within seconds and searches as the main thread does, a change made while it was down included', async () => {
+    const { logger, logged } = recordingLogger();
+    // The second death comes soon after the first restart, so its replacement waits 500 ms.
+    const healing = createSearchPool(logger, 2, { restartBackoff: { firstMs: 500, maxMs: 500 } });
+    const own = createLibraryIndex(
+      Array.from({ length: 500 }, (_, i) => revision(i)),
+      { sharedMemory: true },
+    );
+    // The pool searches `own` through a source that counts the searches redone on this thread, which
+    // would hide a worker that lacks the snapshot (it answers a failure, and the search is redone).
+    let searchedHere = 0;
+    const source: SearchSource = {
+      get version() {
+        return own.version;
+      },
+      snapshot: () => own.snapshot(),
+      index: {
+        search: (peaks: PeakList, options: SpectrumSearchOptions) => {
+          searchedHere++;
+          return own.index.search(peaks, options);
+        },
+      } as SpectrumIndex,
+    };
+    healing.sync(source);
+    healing.warm();
+    const options = { k: 5, withMatchedPeaks: true };
+    expect(await Promise.all([healing.search(source, spectra[1]!, options), healing.search(source, spectra[2]!, options)])).toEqual(
+      [1, 2].map((i) => own.index.search(spectra[i]!, options)),
+    );
+    const originals = healing.runningWorkers();
+    await originals[0]!.terminate();
+    expect(healing.runningWorkers()).toEqual([originals[1]]);
+    await until(() => healing.runningWorkers().length === 2);
+    const replacement = healing.runningWorkers().find((worker) => !originals.includes(worker));
+    expect(replacement).toBeDefined();
+    expect(await healing.search(source, spectra[3]!, options)).toEqual(own.index.search(spectra[3]!, options));
+
+    await replacement!.terminate();
+    expect(healing.runningWorkers()).toEqual([originals[1]]);
+    // While only one worker runs: a revision put, another removed, and the snapshot sent as the change
+    // queue does once it drains.
+    own.put({ ...revision(LIBRARY_SIZE), accession: 'IF-SIM-WHILE-DOWN' });
+    own.remove('IF-SIM-5');
+    healing.sync(source);
+    await until(() => healing.runningWorkers().length === 2);
+    expect(healing.runningWorkers()).not.toContain(replacement);
+
+    // Least work pending first, in the order the workers joined: the second and fourth search go to
+    // the newest worker, which so answers both queries.
+    const queries = [spectra[LIBRARY_SIZE]!, spectra[LIBRARY_SIZE]!, spectra[5]!, spectra[5]!];
+    const answers = Promise.all(queries.map((q) => healing.search(source, q, options)));
+    expect(healing.outstanding()).toEqual([2, 2]);
+    const hits = await answers;
+    queries.forEach((q, i) => expect(hits[i]).toEqual(own.index.search(q, options)));
+    expect(own.meta(hits[1]![0]!.id).accession).toBe('IF-SIM-WHILE-DOWN');
+    expect(hits[3]!.map((hit) => own.metaIfPresent(hit.id)?.accession)).not.toContain('IF-SIM-5');
+    expect(hits[3]!.every((hit) => own.metaIfPresent(hit.id) !== undefined)).toBe(true);
+    expect(searchedHere).toBe(0);
+
+    expect(logged('search worker died').map((entry) => [entry.workers, entry.restartInMs])).toEqual([
+      [1, 0],
+      [1, 500],
+    ]);
+    expect(logged('search worker restarted').map((entry) => entry.workers)).toEqual([2, 2]);
+    await healing.close();
+  });
+
+  it('restarts a worker that keeps dying at start after growing delays instead of at once, and resets them once one has lived a while', async () => {
+    const { logger, logged } = recordingLogger();
+    const starts: number[] = [];
+    let healthy = false;
+    const stubborn = createSearchPool(logger, 1, {
+      restartBackoff: { firstMs: 100, maxMs: 400 },
+      stableAfterMs: 1500,
+      startWorker: () => {
+        starts.push(performance.now());
+        return healthy ? searchWorker() : failingWorker();
+      },
+    });
+    stubborn.sync(library);
+    stubborn.warm();
+    const deaths = () => logged('search worker died').map((entry) => entry.restartInMs);
+    await until(() => deaths().length >= 6, 10_000);
+    expect(deaths().slice(0, 6)).toEqual([0, 100, 200, 400, 400, 400]);
+    // Each start waited at least the delay logged at the death before it; restarting at once each
+    // time would have made dozens of starts by now.
+    const gaps = starts.slice(1).map((at, i) => at - starts[i]!);
+    gaps.forEach((gap, i) => expect(gap).toBeGreaterThanOrEqual(deaths()[i]!));
+    expect(starts[5]! - starts[0]!).toBeGreaterThanOrEqual(100 + 200 + 400 + 400);
+    expect(starts.length).toBeLessThanOrEqual(deaths().length + 1);
+    // Meanwhile the main thread answers.
+    expect(stubborn.runningWorkers()).toHaveLength(0);
+    expect(await stubborn.search(library, spectra[4]!, { k: 3 })).toEqual(library.index.search(spectra[4]!, { k: 3 }));
+
+    healthy = true;
+    await until(() => stubborn.runningWorkers().length === 1);
+    expect(await stubborn.search(library, spectra[6]!, { k: 3 })).toEqual(library.index.search(spectra[6]!, { k: 3 }));
+    // Once it has lived past stableAfterMs, its death is a first one again: restarted at once.
+    await sleep(1600);
+    const died = deaths().length;
+    await stubborn.runningWorkers()[0]!.terminate();
+    expect(deaths().slice(died)).toEqual([0]);
+    await until(() => stubborn.runningWorkers().length === 1);
+    expect(logged('search worker restarted').map((entry) => entry.workers)).toEqual([1, 1]);
+    await stubborn.close();
+  });
+
+  it('once closed, restarts no worker: neither one waiting for its delay nor one still starting', async () => {
+    const { logger, logged } = recordingLogger();
+    let waitingStarts = 0;
+    const waiting = createSearchPool(logger, 1, {
+      restartBackoff: { firstMs: 300, maxMs: 300 },
+      startWorker: () => {
+        waitingStarts++;
+        return failingWorker();
+      },
+    });
+    waiting.warm();
+    // The first restart is at once; after the second death the next one waits 300 ms.
+    await until(() => logged('search worker died').length === 2);
+    expect(waitingStarts).toBe(2);
+    await waiting.close();
+    await sleep(500);
+    expect(waitingStarts).toBe(2);
+
+    // A real worker, then a replacement that never gets ready (it never listens for tasks).
+    const workers: Worker[] = [];
+    const exited: Worker[] = [];
+    const starting = createSearchPool(log, 1, {
+      startWorker: () => {
+        const worker = workers.length === 0 ? searchWorker() : new Worker('setInterval(() => {}, 1000);', { eval: true });
+        worker.on('exit', () => exited.push(worker));
+        workers.push(worker);
+        return worker;
+      },
+    });
+    starting.sync(library);
+    expect(await starting.read(clusters[0]!)).toEqual(readOnThisThread(clusters[0]!));
+    await workers[0]!.terminate();
+    await until(() => workers.length === 2);
+    expect(starting.runningWorkers()).toHaveLength(0);
+    await starting.close();
+    await until(() => exited.length === 2);
+    expect(exited[1]).toBe(workers[1]);
+    await sleep(300);
+    expect(workers).toHaveLength(2);
+    expect(await starting.search(library, spectra[3]!, { k: 2 })).toEqual(library.index.search(spectra[3]!, { k: 2 }));
   });
 
   it('once closed, answers on the calling thread', async () => {

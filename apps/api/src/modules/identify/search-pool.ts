@@ -41,6 +41,9 @@ export type SearchWorkerAnswer =
 /** `ms`: the worker's time on the task, from which the pool estimates the work it has queued. */
 export type SearchWorkerReply = { id: number; ms: number } & SearchWorkerAnswer;
 
+/** What a worker posts: `ready` once, when it listens for tasks, then a reply per task. */
+export type SearchWorkerMessage = { ready: true } | SearchWorkerReply;
+
 /**
  * A full garbage collection of this thread that also hands the freed heap back (what the inspector's
  * "collect garbage" does). V8 counts ordinary ArrayBuffers as external memory and collects when they
@@ -98,9 +101,28 @@ export interface SearchPool {
   close(): Promise<void>;
   /** Tasks sent to each running worker and not yet answered (tests). */
   outstanding(): number[];
-  /** The running workers (tests, which terminate one). */
+  /** The workers that take tasks; a replacement joins once it is ready (tests, which terminate one). */
   runningWorkers(): Worker[];
 }
+
+export interface SearchPoolOptions {
+  /** Bytes of dropped shared arrays after which every thread collects its garbage (tests lower it). */
+  collectAfterDroppedBytes?: number;
+  /**
+   * Delay before the second restart of a worker that keeps dying soon after it starts, doubled at each
+   * further death up to `maxMs`. The first restart is at once.
+   */
+  restartBackoff?: { firstMs: number; maxMs: number };
+  /** A worker that lived this long resets its backoff when it dies. */
+  stableAfterMs?: number;
+  /** Starts a worker; tests pass one that fails at start. */
+  startWorker?: () => Worker;
+}
+
+const RESTART_BACKOFF = { firstMs: 1000, maxMs: 60_000 };
+const STABLE_AFTER_MS = 30_000;
+
+const startSearchWorker = () => startModuleWorker(new URL('./search-worker', import.meta.url), import.meta.url);
 
 type TaskKind = 'search' | 'read';
 
@@ -111,11 +133,21 @@ interface Pending {
   reject: (err: unknown) => void;
 }
 
+/** A place in the pool, which keeps its backoff across the workers that fill it in turn. */
+interface Slot {
+  /** Deaths in a row of workers that died before living `stableAfterMs`. */
+  quickDeaths: number;
+}
+
 interface Lane {
   worker: Worker;
+  slot: Slot;
+  startedAt: number;
   pending: Map<number, Pending>;
   /** Estimated CPU time of the pending tasks. */
   loadMs: number;
+  /** The snapshot this worker was sent last. */
+  holds?: { source: SearchSource; version: number };
 }
 
 /**
@@ -123,17 +155,26 @@ interface Lane {
  * (SpectrumIndex.fromSnapshot) and serve searches and molecular-ion readings. A task goes to the
  * worker with the least estimated work pending (a search costs about six readings), so that one
  * identify's search and reading run at once on two cores and concurrent identifies use both.
- * Started on the first task or by warm(); a worker that fails leaves the pool, its unanswered tasks
- * are redone on the calling thread, and with no worker left everything runs there.
+ * Started on the first task or by warm(). A worker that dies leaves the pool, its unanswered tasks
+ * are redone on the calling thread, and a new worker takes its place: at once the first time, then
+ * after a delay that doubles while the workers of that place keep dying soon after they start. The
+ * new one takes tasks once it is ready and holds the latest snapshot; until then the other workers,
+ * or with none left the calling thread, do them.
  */
-export function createSearchPool(log: Logger, size: number, options: { collectAfterDroppedBytes?: number } = {}): SearchPool {
+export function createSearchPool(log: Logger, size: number, options: SearchPoolOptions = {}): SearchPool {
   const collectAfterDroppedBytes = options.collectAfterDroppedBytes ?? COLLECT_AFTER_DROPPED_BYTES;
+  const backoff = options.restartBackoff ?? RESTART_BACKOFF;
+  const stableAfterMs = options.stableAfterMs ?? STABLE_AFTER_MS;
+  const startWorker = options.startWorker ?? startSearchWorker;
+  // The workers that take tasks, and replacements that are not ready yet.
   const lanes: Lane[] = [];
+  const joining = new Set<Lane>();
+  const restarts = new Set<NodeJS.Timeout>();
   let started = false;
   let closed = false;
   let nextId = 0;
-  // What the workers were sent last, and what they should hold.
-  let sent: { source: SearchSource; version: number } | undefined;
+  // The last snapshot sent to any worker, and what the workers should hold.
+  let sent: { source: SearchSource; version: number; snapshot: SpectrumIndexSnapshot } | undefined;
   let wanted: SearchSource | undefined;
   // Running averages of the CPU time of each kind, as the workers report it; first guesses from the
   // 300k benchmark library (docs/benchmarks.md).
@@ -166,20 +207,43 @@ export function createSearchPool(log: Logger, size: number, options: { collectAf
     return true;
   };
 
+  // Called for a worker's 'error' and for its 'exit' (an error is followed by an exit); after close()
+  // the lanes are gone, so neither counts.
   const leave = (lane: Lane, err: unknown) => {
     const at = lanes.indexOf(lane);
-    if (at < 0) return;
-    lanes.splice(at, 1);
-    log.warn({ err, workersLeft: lanes.length }, 'search worker failed; its tasks run on the main thread or the other workers');
+    if (at >= 0) lanes.splice(at, 1);
+    else if (!joining.delete(lane)) return;
     for (const p of lane.pending.values()) p.reject(err);
     lane.pending.clear();
     lane.loadMs = 0;
+    const { slot } = lane;
+    if (performance.now() - lane.startedAt >= stableAfterMs) slot.quickDeaths = 0;
+    const restartInMs = slot.quickDeaths === 0 ? 0 : Math.min(backoff.maxMs, backoff.firstMs * 2 ** (slot.quickDeaths - 1));
+    slot.quickDeaths++;
+    log.warn({ err, workers: lanes.length, restartInMs }, 'search worker died; its tasks run on the other workers or the main thread until it is replaced');
+    const restart = setTimeout(() => {
+      restarts.delete(restart);
+      if (!closed) joining.add(startLane(slot));
+    }, restartInMs);
+    // A pending restart must not keep the process alive, no more than an idle worker does.
+    restart.unref();
+    restarts.add(restart);
   };
 
-  const startLane = (): Lane => {
-    const worker = startModuleWorker(new URL('./search-worker', import.meta.url), import.meta.url);
-    const lane: Lane = { worker, pending: new Map(), loadMs: 0 };
-    worker.on('message', (reply: SearchWorkerReply) => {
+  // A replacement takes tasks once it listens, after the latest snapshot, so that no task waits for
+  // it to boot while another thread could do it.
+  const join = (lane: Lane) => {
+    if (!joining.delete(lane)) return;
+    lanes.push(lane);
+    if (wanted) pool.sync(wanted);
+    log.warn({ workers: lanes.length }, 'search worker restarted');
+  };
+
+  const startLane = (slot: Slot = { quickDeaths: 0 }): Lane => {
+    const worker = startWorker();
+    const lane: Lane = { worker, slot, startedAt: performance.now(), pending: new Map(), loadMs: 0 };
+    worker.on('message', (reply: SearchWorkerMessage) => {
+      if ('ready' in reply) return join(lane);
       const p = lane.pending.get(reply.id);
       if (!p) return;
       lane.pending.delete(reply.id);
@@ -198,7 +262,6 @@ export function createSearchPool(log: Logger, size: number, options: { collectAf
     if (started || closed) return;
     started = true;
     for (let i = 0; i < size; i++) lanes.push(startLane());
-    sent = undefined;
     if (wanted) pool.sync(wanted);
   };
 
@@ -237,12 +300,19 @@ export function createSearchPool(log: Logger, size: number, options: { collectAf
   const pool: SearchPool = {
     sync(source) {
       wanted = source;
-      if (lanes.length === 0) return; // a worker that starts later is sent it then
-      if (sent?.source === source && sent.version === source.version) return;
-      const snapshot = source.snapshot();
-      sent = { source, version: source.version };
-      const collect = countDropped(snapshot);
-      for (const lane of lanes) lane.worker.postMessage({ kind: 'snapshot', snapshot, collectGarbage: collect } satisfies SearchWorkerTask);
+      // A worker that starts or joins later is sent it then.
+      const behind = lanes.filter((lane) => lane.holds?.source !== source || lane.holds.version !== source.version);
+      if (behind.length === 0) return;
+      // A replacement that only catches up on the snapshot the others hold has no older arrays to drop.
+      let collect = false;
+      if (sent?.source !== source || sent.version !== source.version) {
+        sent = { source, version: source.version, snapshot: source.snapshot() };
+        collect = countDropped(sent.snapshot);
+      }
+      for (const lane of behind) {
+        lane.worker.postMessage({ kind: 'snapshot', snapshot: sent.snapshot, collectGarbage: collect } satisfies SearchWorkerTask);
+        lane.holds = { source, version: source.version };
+      }
       if (collect) collectSoon();
     },
     search(source, peaks, options) {
@@ -264,7 +334,10 @@ export function createSearchPool(log: Logger, size: number, options: { collectAf
     async close() {
       closed = true;
       clearTimeout(collecting);
-      const stopping = lanes.splice(0);
+      for (const restart of restarts) clearTimeout(restart);
+      restarts.clear();
+      const stopping = [...lanes.splice(0), ...joining];
+      joining.clear();
       sent = undefined;
       wanted = undefined;
       // Unanswered tasks are redone here rather than left waiting for a worker that is gone.

@@ -2,7 +2,14 @@
 // over the main thread's shared memory and answers searches and molecular-ion readings.
 import { parentPort } from 'node:worker_threads';
 import { ChemError, SpectrumIndex } from '@ionfolio/chem';
-import { collectGarbage, readOnThisThread, type SearchWorkerAnswer, type SearchWorkerReply, type SearchWorkerTask } from './search-pool';
+import {
+  collectGarbage,
+  readOnThisThread,
+  type SearchWorkerAnswer,
+  type SearchWorkerMessage,
+  type SearchWorkerReply,
+  type SearchWorkerTask,
+} from './search-pool';
 
 let index: SpectrumIndex | undefined;
 
@@ -28,5 +35,7 @@ parentPort?.on('message', (task: SearchWorkerTask) => {
   }
   const t0 = performance.now();
   const reply: SearchWorkerReply = { ...answer(task), id: task.id, ms: performance.now() - t0 };
-  parentPort!.postMessage(reply);
+  parentPort!.postMessage(reply satisfies SearchWorkerMessage);
 });
+// A replacement worker takes tasks from here on.
+parentPort?.postMessage({ ready: true } satisfies SearchWorkerMessage);
