@@ -51,7 +51,7 @@ export const searchServiceOf = (app: Express): SearchService => app.locals.searc
 /** Builds the Express app. It never listens: main.ts and the tests do that. */
 export function createApp({ env, dataSource, logger, sessionPool, search: givenSearch }: AppDeps): Express {
   const app = express();
-  const search = givenSearch ?? createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger });
+  const search = givenSearch ?? createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger, searchWorkers: env.IONFOLIO_SEARCH_WORKERS });
   app.locals.search = search;
   const identifyLimit = rateLimit({ perMinute: env.IDENTIFY_RATE_PER_MINUTE, burst: env.IDENTIFY_RATE_BURST });
   app.disable('x-powered-by');

@@ -19,7 +19,7 @@ const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
 // When PostgreSQL restarts, idle clients die and the pool says so here before replacing them; an
 // 'error' event without a listener would end the process.
 sessionPool.on('error', (err) => logger.warn({ err }, 'session pool lost a connection; it reconnects on the next request'));
-const search = createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger });
+const search = createSearchService({ ds: dataSource, databaseUrl: env.DATABASE_URL, logger, searchWorkers: env.IONFOLIO_SEARCH_WORKERS });
 // The search workers boot while the library loads; they are sent the index once it is loaded.
 search.pool.warm();
 // The library index is loaded (and LISTEN in place) before the first request is accepted.
