@@ -480,10 +480,10 @@ export class SpectrumIndex {
       hits ??= select(candidates) ?? []; // without a budget select always answers
       return hits.map((hit) => {
         const matchedPeakCount = scratch.count[hit.slot] as number;
-        const shared = options.withMatchedPeaks === true ? { matchedPeaks: matchedPeaks(queryView, this.viewOf(hit.slot)) } : {};
-        if (!search.reverse) return { id: hit.id, score: hit.score, matchedPeakCount, ...shared };
+        const evidence = options.withMatchedPeaks === true ? { matchedPeaks: matchedPeaks(queryView, this.viewOf(hit.slot)) } : {};
+        if (!search.reverse) return { id: hit.id, score: hit.score, matchedPeakCount, ...evidence };
         const score = scoreSpectrumViews(queryView, this.viewOf(hit.slot), search.method, false);
-        return { id: hit.id, score, reverseScore: hit.score, matchedPeakCount, ...shared };
+        return { id: hit.id, score, reverseScore: hit.score, matchedPeakCount, ...evidence };
       });
     } finally {
       scratch.count.fill(0, 0, this.slotCount);

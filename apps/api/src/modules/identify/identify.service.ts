@@ -66,7 +66,7 @@ function ranked(meta: CandidateMeta, hit: SpectrumHit): RankedCandidate {
  */
 function candidatesOf<C>(library: LibraryIndex, hits: SpectrumHit[], make: (meta: CandidateMeta, hit: SpectrumHit) => C): C[] {
   return hits.flatMap((hit) => {
-    const meta = library.metaIfPresent(hit.id);
+    const meta = library.meta(hit.id);
     return meta ? [make(meta, hit)] : [];
   });
 }

@@ -1,4 +1,4 @@
-import { SpectrumIndex, type MatchedPeak, type PeakList, type SpectrumIndexSnapshot } from '@ionfolio/chem';
+import { SpectrumIndex, type SpectrumIndexSnapshot } from '@ionfolio/chem';
 import { COLUMN_CLASSES } from '@ionfolio/contracts';
 import { formulaMask } from './element-mask';
 
@@ -36,11 +36,8 @@ export interface LibraryIndex {
   readonly size: number;
   /** Counts the puts and removes so far, so that a search pool can tell whether its workers are current. */
   readonly version: number;
-  meta(id: number): CandidateMeta;
   /** The meta of the hit `id`, or undefined once its revision has left the index. */
-  metaIfPresent(id: number): CandidateMeta | undefined;
-  /** The peaks the query shares with the hit `id`, as compareSpectra lists them. */
-  matchedPeaks(query: PeakList, id: number): MatchedPeak[];
+  meta(id: number): CandidateMeta | undefined;
   /** Adds the revision, replacing whatever revision of the same entry was there. */
   put(revision: LibraryRevision): void;
   /** Removes the entry's revision; true if there was one. */
@@ -56,7 +53,7 @@ function emptyLibraryIndex(options: { reserve?: { spectra: number; peaks: number
   const metaById = new Map<number, CandidateMeta>();
   const idByAccession = new Map<string, number>();
   // Ids are never reused within one library index, so a hit found on an older snapshot names either
-  // its own revision or one that has left (metaIfPresent answers undefined), never another entry.
+  // its own revision or one that has left (meta answers undefined), never another entry.
   let nextId = 1;
   let version = 0;
 
@@ -69,15 +66,7 @@ function emptyLibraryIndex(options: { reserve?: { spectra: number; peaks: number
       return version;
     },
     meta(id) {
-      const meta = metaById.get(id);
-      if (!meta) throw new Error(`library index: no revision for id ${id}`);
-      return meta;
-    },
-    metaIfPresent(id) {
       return metaById.get(id);
-    },
-    matchedPeaks(query, id) {
-      return index.matchedPeaks(query, id);
     },
     put(revision) {
       library.remove(revision.accession);

@@ -62,6 +62,6 @@ describe('loading the published library in pages', () => {
     const [hit] = library.index.search(rows[0]!.peaks, { k: 1 });
     expect(library.meta(hit!.id)).toMatchObject({ accession: accessions[0], revision: 1 });
     expect(library.meta(hit!.id)).not.toHaveProperty('peaks');
-    expect(library.matchedPeaks(rows[0]!.peaks, hit!.id)).toHaveLength(rows[0]!.peaks.length);
+    expect(library.index.matchedPeaks(rows[0]!.peaks, hit!.id)).toHaveLength(rows[0]!.peaks.length);
   });
 });

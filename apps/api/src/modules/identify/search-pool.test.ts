@@ -145,7 +145,7 @@ describe('search pool', () => {
     );
     const target = 'IF-SIM-40';
     const targetId = fresh.index.search(spectra[40]!, { k: 1 })[0]!.id;
-    expect(fresh.meta(targetId).accession).toBe(target);
+    expect(fresh.meta(targetId)?.accession).toBe(target);
     const options = { method: 'composite' as const, reverse: false };
     const hits = pool.search(fresh, spectra[40]!, { k: 3 });
     const candidates = searchCandidates(fresh, spectra[40]!, options, 3, { pool });
@@ -280,9 +280,9 @@ describe('search pool', () => {
     expect(healing.outstanding()).toEqual([2, 2]);
     const hits = await answers;
     queries.forEach((q, i) => expect(hits[i]).toEqual(own.index.search(q, options)));
-    expect(own.meta(hits[1]![0]!.id).accession).toBe('IF-SIM-WHILE-DOWN');
-    expect(hits[3]!.map((hit) => own.metaIfPresent(hit.id)?.accession)).not.toContain('IF-SIM-5');
-    expect(hits[3]!.every((hit) => own.metaIfPresent(hit.id) !== undefined)).toBe(true);
+    expect(own.meta(hits[1]![0]!.id)?.accession).toBe('IF-SIM-WHILE-DOWN');
+    expect(hits[3]!.map((hit) => own.meta(hit.id)?.accession)).not.toContain('IF-SIM-5');
+    expect(hits[3]!.every((hit) => own.meta(hit.id) !== undefined)).toBe(true);
     expect(searchedHere).toBe(0);
 
     expect(logged('search worker died').map((entry) => [entry.workers, entry.restartInMs])).toEqual([
