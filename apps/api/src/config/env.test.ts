@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadEnv, loadSearchWorkers } from './env';
+import { loadEnv } from './env';
 
 // The keys loadEnv requires, with placeholder values.
 const base = {
@@ -23,13 +23,6 @@ describe('IONFOLIO_SEARCH_WORKERS', () => {
       expect(() => loadEnv({ ...base, IONFOLIO_SEARCH_WORKERS: value })).toThrow(
         /\n {2}IONFOLIO_SEARCH_WORKERS: must be an integer from 0 to 16\n/,
       );
-      expect(() => loadSearchWorkers({ IONFOLIO_SEARCH_WORKERS: value })).toThrow(/IONFOLIO_SEARCH_WORKERS: must be an integer from 0 to 16/);
-    }
-  });
-
-  it('read alone, gives what loadEnv gives', () => {
-    for (const value of [undefined, '', '0', '5']) {
-      expect(loadSearchWorkers({ IONFOLIO_SEARCH_WORKERS: value })).toBe(loadEnv({ ...base, IONFOLIO_SEARCH_WORKERS: value }).IONFOLIO_SEARCH_WORKERS);
     }
   });
 });

@@ -82,10 +82,3 @@ export function loadDatabaseUrl(source: NodeJS.ProcessEnv = process.env): string
   if (!parsed.success) throw new Error('Invalid configuration:\n  DATABASE_URL: must be a postgres:// URL');
   return parsed.data.DATABASE_URL;
 }
-
-/** IONFOLIO_SEARCH_WORKERS alone, for a search service made without the parsed Env at hand. */
-export function loadSearchWorkers(source: NodeJS.ProcessEnv = process.env): number {
-  const parsed = SearchWorkers.safeParse(source.IONFOLIO_SEARCH_WORKERS);
-  if (!parsed.success) throw new Error(`Invalid configuration:\n  IONFOLIO_SEARCH_WORKERS: ${SEARCH_WORKERS_MESSAGE}`);
-  return parsed.data;
-}

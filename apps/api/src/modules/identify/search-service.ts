@@ -1,6 +1,5 @@
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
-import { loadSearchWorkers } from '../../config/env';
 import { createBatchRunner, type BatchRunner } from './batch.service';
 import { createLibrarySearch, type LibrarySearch } from './library-search';
 import { createSearchPool, type SearchPool } from './search-pool';
@@ -16,12 +15,9 @@ export interface SearchService {
   stop(): Promise<void>;
 }
 
-/**
- * `searchWorkers`: threads of the search pool, `env.IONFOLIO_SEARCH_WORKERS`; 0 = the main thread. When
- * not given, the variable is read here (same parse, same default of 2).
- */
-export function createSearchService(options: { ds: DataSource; databaseUrl: string; logger: Logger; searchWorkers?: number }): SearchService {
-  const workers = options.searchWorkers ?? loadSearchWorkers();
+/** `searchWorkers`: threads of the search pool, `env.IONFOLIO_SEARCH_WORKERS`; 0 = the main thread. */
+export function createSearchService(options: { ds: DataSource; databaseUrl: string; logger: Logger; searchWorkers: number }): SearchService {
+  const workers = options.searchWorkers;
   const pool = createSearchPool(options.logger, workers);
   // Without workers the index needs no shared memory and no snapshots.
   const library = createLibrarySearch({ ...options, pool: workers > 0 ? pool : undefined });
